@@ -1,0 +1,4 @@
+export * from './errors';
+export * from './phasor';
+export * from './parse';
+export * from './format';

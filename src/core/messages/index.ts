@@ -1,0 +1,7 @@
+/**
+ * The message catalogue: every message an engineer can see, in one place, one module
+ * per area. Messages say what was wrong, which argument, and what to do.
+ */
+export { parseMessages } from './parse';
+export { readerMessages } from './readers';
+export { valueMessages } from './values';

@@ -1,0 +1,47 @@
+/** Messages of the phasor parser (part of the one message catalogue, src/core/messages). */
+import type { Quantity } from '../parse';
+
+const FORMS = 'write it like 4+j2, 230∠-120, 230∠-120°, 1∠0.5rad or 230e^(j30)';
+
+const UNIT_OF: Record<Quantity, string> = {
+  voltage: 'V',
+  current: 'A',
+  impedance: 'Ω',
+  admittance: 'S',
+  power: 'VA, W or var',
+};
+
+function quote(text: string): string {
+  return text.length > 60 ? `"${text.slice(0, 57)}…"` : `"${text}"`;
+}
+
+export const parseMessages = {
+  empty: `the text is empty: ${FORMS}`,
+  numberExpected: 'a number was expected here',
+  partExpected: 'a real or j-imaginary part was expected after the sign',
+  angleExpected: 'an angle in degrees (or with "rad") was expected after ∠, < or @',
+  expForm: 'the exponential form is written e^(j30) or e^(-j0.5rad)',
+  closeParen: 'a closing ")" was expected after the angle',
+  expectedSign: 'a + or − was expected between the parts',
+  twoImag: 'the text has two imaginary parts',
+  twoReal: 'the text has two real parts',
+  twoUnits: 'a phasor takes one unit, not two',
+  unexpected: 'this is not part of a phasor or a known unit (V, A, Ω or ohm, S, W, VA, var, with an optional prefix p n µ m k M G)',
+  stoppedAt(text: string, at: number, why: string): string {
+    const rest = text.slice(at);
+    const where = rest.length === 0 ? 'at the end' : `at ${quote(rest)} (character ${at + 1})`;
+    return `cannot read ${quote(text)} as a phasor: stopped ${where}, ${why}; ${FORMS}`;
+  },
+  commaAndPoint(text: string): string {
+    return `cannot read ${quote(text)}: it mixes a decimal comma and a decimal point; use one decimal separator, e.g. 4.5+j2.25 or 4,5+j2,25`;
+  },
+  ambiguousComma(text: string): string {
+    return `cannot read ${quote(text)}: the comma could be a thousands separator or a decimal comma; write 1000 or 1.000 (no thousands separators)`;
+  },
+  wrongQuantity(text: string, got: Quantity, expected: Quantity): string {
+    return `${quote(text)} is a ${got} but a ${expected} is expected here; give it in ${UNIT_OF[expected]} or without a unit`;
+  },
+  tooLarge(text: string): string {
+    return `${quote(text)} is too large to compute with; give a value below 1e300`;
+  },
+};

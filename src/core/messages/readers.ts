@@ -1,0 +1,61 @@
+/** Messages of the argument readers and the shared function guard. */
+
+export const readerMessages = {
+  blankRequired(where: string): string {
+    return `${where} is blank: a phasor is required here; enter a value such as 230∠0 or 4+j2`;
+  },
+  noPhasors(name: string): string {
+    return `${name} holds no phasor (every cell is blank): give at least one value such as 230∠0`;
+  },
+  notOne(name: string, n: number): string {
+    return `${name} must be one phasor but holds ${n}: give a single cell or value`;
+  },
+  boolean(where: string): string {
+    return `${where} is TRUE/FALSE, not a phasor: give a number or text such as 4+j2`;
+  },
+  errorValue(where: string): string {
+    return `${where} holds an error value: fix the cell it comes from first`;
+  },
+  unsupported(where: string): string {
+    return `${where} holds a value that is neither a number nor text: give a number or text such as 4+j2`;
+  },
+  notFinite(where: string): string {
+    return `${where} is not a finite number: give a finite value`;
+  },
+  halfPair(name: string, row: number): string {
+    return `row ${row} of ${name} has one part of a real/imaginary pair but not the other: enter 0 for a zero part`;
+  },
+  inCell(where: string, message: string): string {
+    return `${where}: ${message}`;
+  },
+  numberExpected(where: string, got: string): string {
+    return `${where} must be a number but is ${got}: give a plain number`;
+  },
+  numberRequired(where: string): string {
+    return `${where} is blank: a number is required here`;
+  },
+  outOfRange(where: string, value: number, range: string): string {
+    return `${where} is ${value} but must be ${range}`;
+  },
+  wholeNumber(where: string, value: number): string {
+    return `${where} is ${value} but must be a whole number`;
+  },
+  choice(where: string, got: string, choices: readonly string[]): string {
+    return `${where} is "${got}", which is not one of ${choices.map((c) => `"${c}"`).join(', ')}: use one of those (any case)`;
+  },
+  booleanExpected(where: string, got: string): string {
+    return `${where} must be TRUE or FALSE but is ${got}`;
+  },
+  counts(described: string): string {
+    return `the arguments hold different numbers of values (${described}): give equal counts, or a single value to use for every row`;
+  },
+  tooManyArgs(fn: string, max: number, got: number): string {
+    return `PHZ.${fn} takes at most ${max} argument${max === 1 ? '' : 's'} but was given ${got}`;
+  },
+  nonFiniteResult(fn: string): string {
+    return `PHZ.${fn} gave a result that is not a finite number (a division by zero or an overflow): check the inputs for zero impedances, open circuits or zero voltages`;
+  },
+  internal(fn: string, detail: string): string {
+    return `PHZ.${fn} could not compute this (${detail}); check the inputs, and report it if they are valid`;
+  },
+};

@@ -1,0 +1,370 @@
+/**
+ * The one phasor parser. Every text a cell can hold goes through `parsePhasor`.
+ *
+ * Notations (spaces anywhere; letters j, i, e, rad, deg and unit words in any case):
+ * - rectangular: `4+j2`, `4+2j`, `4+2i`, `4 - j 2`, `-j3`, `j`, `2.5e-3+j1e-2`, `−` (U+2212) as minus;
+ * - polar, degrees by default: `230∠-120`, `230∠-120°`, `230<-120`, `230@-120`, `1∠0.5rad`;
+ * - exponential: `230e^(j30)`, `230e^(-j30°)`;
+ * - a decimal comma where no other reading exists: `4,5+j2,25`;
+ * - a unit with SI prefix after the number or at the end: `11 kV∠0`, `4+j2 Ω`, `250 mΩ`.
+ *   The prefix scales the value; the unit word is checked (and, when the caller says
+ *   what quantity it expects, matched), never converted.
+ */
+import { PhzError } from './errors';
+import { polarDeg, polar, rect, type Phasor } from './phasor';
+import { parseMessages as M } from './messages/parse';
+
+/** The physical quantity a unit word names. */
+export type Quantity = 'voltage' | 'current' | 'impedance' | 'admittance' | 'power';
+
+export interface ParseOptions {
+  /** When set, a unit word for another quantity is an error. */
+  readonly expect?: Quantity;
+}
+
+const UNIT_WORDS: ReadonlyArray<readonly [string, Quantity]> = [
+  // longest first, so "var" is not read as "va" + "r"
+  ['ohms', 'impedance'],
+  ['ohm', 'impedance'],
+  ['var', 'power'],
+  ['va', 'power'],
+  ['v', 'voltage'],
+  ['a', 'current'],
+  ['w', 'power'],
+  ['s', 'admittance'],
+  // Ω: both the Greek capital omega (U+03A9) and the ohm sign (U+2126) lower-case to ω
+  ['\u03c9', 'impedance'],
+];
+
+const PREFIX: Readonly<Record<string, number>> = {
+  p: 1e-12,
+  n: 1e-9,
+  u: 1e-6,
+  '\u00b5': 1e-6, // µ micro sign
+  '\u03bc': 1e-6, // μ Greek mu
+  m: 1e-3,
+  k: 1e3,
+  K: 1e3,
+  M: 1e6,
+  G: 1e9,
+};
+
+const C_SPACE = 32;
+const C_TAB = 9;
+const C_NBSP = 0xa0;
+const C_PLUS = 43;
+const C_MINUS = 45;
+const C_UMINUS = 0x2212;
+const C_DOT = 46;
+const C_COMMA = 44;
+const C_0 = 48;
+const C_9 = 57;
+
+function isDigit(c: number): boolean {
+  return c >= C_0 && c <= C_9;
+}
+
+function lower(c: number): number {
+  return c >= 65 && c <= 90 ? c + 32 : c;
+}
+
+/** Scanner state for one text; positions are UTF-16 indexes. */
+class Scanner {
+  i = 0;
+  unit: Quantity | null = null;
+  /** Whether the last angle read was in radians. */
+  rad = false;
+  constructor(
+    readonly s: string,
+    readonly decimalComma: boolean,
+  ) {}
+
+  get done(): boolean {
+    return this.i >= this.s.length;
+  }
+  peek(): number {
+    return this.s.charCodeAt(this.i);
+  }
+  ws(): void {
+    const s = this.s;
+    for (;;) {
+      const c = s.charCodeAt(this.i);
+      if (c === C_SPACE || c === C_TAB || c === C_NBSP || c === 0x202f || c === 10 || c === 13) this.i++;
+      else return;
+    }
+  }
+  /** Reads an optional sign; returns -1, 1, or 0 when none. */
+  sign(): number {
+    const c = this.peek();
+    if (c === C_PLUS) {
+      this.i++;
+      return 1;
+    }
+    if (c === C_MINUS || c === C_UMINUS) {
+      this.i++;
+      return -1;
+    }
+    return 0;
+  }
+  isLetter(letter: number): boolean {
+    return lower(this.peek()) === letter;
+  }
+  /** Reads an unsigned decimal number, or returns NaN (position unchanged) when none starts here. */
+  number(): number {
+    const s = this.s;
+    const start = this.i;
+    let i = start;
+    let digits = 0;
+    while (isDigit(s.charCodeAt(i))) {
+      i++;
+      digits++;
+    }
+    let text = s.slice(start, i);
+    const c = s.charCodeAt(i);
+    if (c === C_DOT || (c === C_COMMA && this.decimalComma)) {
+      i++;
+      const f = i;
+      while (isDigit(s.charCodeAt(i))) i++;
+      digits += i - f;
+      text += '.' + s.slice(f, i);
+    }
+    if (digits === 0) return NaN;
+    // exponent: e or E followed by digits (not "e^", which starts the exponential form)
+    if (lower(s.charCodeAt(i)) === 101) {
+      let k = i + 1;
+      const sc = s.charCodeAt(k);
+      if (sc === C_PLUS || sc === C_MINUS || sc === C_UMINUS) k++;
+      if (isDigit(s.charCodeAt(k))) {
+        const e0 = k;
+        while (isDigit(s.charCodeAt(k))) k++;
+        text += 'e' + (sc === C_MINUS || sc === C_UMINUS ? '-' : '') + s.slice(e0, k);
+        i = k;
+      }
+    }
+    this.i = i;
+    return Number(text);
+  }
+  /**
+   * Reads an optional unit (SI prefix + unit word) and returns its scale (1 when none).
+   * A unit may appear once in a phasor.
+   */
+  unitScale(): number {
+    const s = this.s;
+    const at = this.i;
+    for (let withPrefix = 1; withPrefix >= 0; withPrefix--) {
+      let k = at;
+      let scale = 1;
+      if (withPrefix) {
+        const p = PREFIX[s[k]];
+        if (p === undefined) continue;
+        scale = p;
+        k++;
+      }
+      for (const [word, q] of UNIT_WORDS) {
+        if (s.length - k < word.length) continue;
+        if (s.slice(k, k + word.length).toLowerCase() !== word) continue;
+        const after = s.charCodeAt(k + word.length);
+        // the unit word must end here: not followed by another letter
+        if (after >= 65 && after <= 90) continue;
+        if (after >= 97 && after <= 122) continue;
+        if (this.unit !== null) throw this.fail(M.twoUnits);
+        this.unit = q;
+        this.i = k + word.length;
+        return scale;
+      }
+    }
+    return 1;
+  }
+  fail(why: string): PhzError {
+    return new PhzError(M.stoppedAt(this.s, this.i, why));
+  }
+}
+
+/**
+ * Angle after ∠ < @ or inside e^(j…): signed number with optional °, deg or rad.
+ * Returns degrees, or radians when the text says rad (then `sc.rad` is set).
+ */
+function angleValue(sc: Scanner): number {
+  sc.rad = false;
+  sc.ws();
+  const sg = sc.sign();
+  sc.ws();
+  const v = sc.number();
+  if (Number.isNaN(v)) throw sc.fail(M.angleExpected);
+  sc.ws();
+  const c = sc.peek();
+  const value = sg === -1 ? -v : v;
+  if (c === 0xb0 || c === 0xba) {
+    sc.i++;
+    return value;
+  }
+  const rest = sc.s.slice(sc.i, sc.i + 3).toLowerCase();
+  if (rest === 'rad') {
+    sc.i += 3;
+    sc.rad = true;
+    return value;
+  }
+  if (rest === 'deg') sc.i += 3;
+  return value;
+}
+
+/** Phasor from a magnitude and the angle just read (exact at multiples of 90°). */
+function fromAngle(sc: Scanner, mag: number, angle: number): Phasor {
+  return sc.rad ? polar(mag, angle) : polarDeg(mag, angle);
+}
+
+function isAngleMark(c: number): boolean {
+  return c === 0x2220 || c === 60 || c === 64; // ∠ < @
+}
+
+/** Exponential tail after the magnitude: e^( ±j θ ). Position is at the 'e'. Returns the angle (see angleValue). */
+function expAngle(sc: Scanner): number {
+  sc.i++; // e
+  sc.ws();
+  if (sc.peek() !== 94) throw sc.fail(M.expForm);
+  sc.i++;
+  sc.ws();
+  if (sc.peek() !== 40) throw sc.fail(M.expForm);
+  sc.i++;
+  sc.ws();
+  const sg = sc.sign();
+  sc.ws();
+  if (!(sc.isLetter(106) || sc.isLetter(105))) throw sc.fail(M.expForm);
+  sc.i++;
+  const a = angleValue(sc);
+  sc.ws();
+  if (sc.peek() !== 41) throw sc.fail(M.closeParen);
+  sc.i++;
+  return sg === -1 ? -a : a;
+}
+
+/** Where a comma is used, decide whether it is a decimal comma. */
+function commaMode(text: string): boolean {
+  if (text.indexOf(',') < 0) return false;
+  if (text.indexOf('.') >= 0) throw new PhzError(M.commaAndPoint(text));
+  // every comma followed by exactly three digits could be a thousands separator: refuse to guess
+  const groups = text.match(/,\d*/g) ?? [];
+  if (groups.every((g) => g.length === 4)) throw new PhzError(M.ambiguousComma(text));
+  return true;
+}
+
+/**
+ * Reads one phasor from text. Throws `PhzError` with what was read, where it stopped
+ * and an example of a valid form.
+ *
+ * @example parsePhasor('230∠-120') // ≈ -115 - j199.186
+ */
+export function parsePhasor(text: string, options?: ParseOptions): Phasor {
+  const sc = new Scanner(text, commaMode(text));
+  sc.ws();
+  if (sc.done) throw new PhzError(M.empty);
+  let re = 0;
+  let im = 0;
+  let terms = 0;
+  let hadImag = false;
+  let hadReal = false;
+  let scale = 1;
+  for (;;) {
+    sc.ws();
+    let sg = sc.sign();
+    if (terms > 0 && sg === 0) throw sc.fail(M.expectedSign);
+    sc.ws();
+    // a second sign, as in 4+-j2
+    if (terms > 0) {
+      const sg2 = sc.sign();
+      if (sg2 !== 0) {
+        sg = sg * sg2;
+        sc.ws();
+      }
+    }
+    const neg = sg === -1;
+    if (sc.isLetter(106) || sc.isLetter(105)) {
+      // j-prefixed imaginary part: j, j2, j 2, and j-2 as some tools write it
+      sc.i++;
+      sc.ws();
+      const inner = sc.sign();
+      sc.ws();
+      let v = sc.number();
+      if (Number.isNaN(v)) {
+        if (inner !== 0) throw sc.fail(M.numberExpected);
+        v = 1;
+      }
+      if (inner === -1) v = -v;
+      if (hadImag) throw sc.fail(M.twoImag);
+      hadImag = true;
+      im = neg ? -v : v;
+    } else if (terms === 0 && sc.isLetter(101)) {
+      // e^(jθ) with magnitude 1
+      const a = expAngle(sc);
+      const z = fromAngle(sc, neg ? -1 : 1, a);
+      return finish(sc, z.re, z.im, options);
+    } else {
+      const v = sc.number();
+      if (Number.isNaN(v)) throw sc.fail(terms === 0 ? M.numberExpected : M.partExpected);
+      const signed = neg ? -v : v;
+      sc.ws();
+      if (sc.isLetter(106) || sc.isLetter(105)) {
+        // suffix imaginary part: 2j, 2i
+        sc.i++;
+        if (hadImag) throw sc.fail(M.twoImag);
+        hadImag = true;
+        im = signed;
+      } else {
+        if (terms === 0) {
+          // magnitude of a polar or exponential form may carry the unit: 11 kV∠0
+          const unitAt = sc.i;
+          const s1 = sc.unitScale();
+          sc.ws();
+          const c = sc.peek();
+          if (isAngleMark(c)) {
+            sc.i++;
+            const a = angleValue(sc);
+            const z = fromAngle(sc, signed * s1, a);
+            return finish(sc, z.re, z.im, options);
+          }
+          if (sc.isLetter(101)) {
+            const a = expAngle(sc);
+            const z = fromAngle(sc, signed * s1, a);
+            return finish(sc, z.re, z.im, options);
+          }
+          if (sc.unit !== null) {
+            // a unit after a plain number ends the phasor: "250 mΩ"
+            scale = s1;
+            re = signed;
+            hadReal = true;
+            terms++;
+            break;
+          }
+          sc.i = unitAt;
+        }
+        if (hadReal) throw sc.fail(M.twoReal);
+        hadReal = true;
+        re = signed;
+      }
+    }
+    terms++;
+    sc.ws();
+    if (sc.done || terms === 2) break;
+    const c = sc.peek();
+    if (c !== C_PLUS && c !== C_MINUS && c !== C_UMINUS) break;
+  }
+  sc.ws();
+  return finish(sc, re * scale, im * scale, options);
+}
+
+/** Reads a trailing unit, checks nothing is left and the unit fits the expected quantity. */
+function finish(sc: Scanner, re: number, im: number, options: ParseOptions | undefined): Phasor {
+  sc.ws();
+  if (!sc.done) {
+    const scale = sc.unitScale();
+    sc.ws();
+    if (!sc.done) throw sc.fail(M.unexpected);
+    re *= scale;
+    im *= scale;
+  }
+  if (options?.expect && sc.unit !== null && sc.unit !== options.expect) {
+    throw new PhzError(M.wrongQuantity(sc.s, sc.unit, options.expect));
+  }
+  if (!Number.isFinite(re) || !Number.isFinite(im)) throw new PhzError(M.tooLarge(sc.s));
+  return rect(re, im);
+}

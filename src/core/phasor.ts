@@ -1,0 +1,101 @@
+/**
+ * Phasor values. A phasor is an immutable complex.js value: every arithmetic method
+ * returns a new value, so a phasor never changes after it is made. Angles are radians
+ * inside the core; degrees appear only at the edges, in names that say so.
+ */
+import Complex from 'complex.js';
+import { PhzError } from './errors';
+
+export type Phasor = Complex;
+
+const DEG = Math.PI / 180;
+
+/** Phasor from rectangular parts. */
+export function rect(re: number, im = 0): Phasor {
+  return new Complex(re, im);
+}
+
+/** Phasor from magnitude and angle in radians. */
+export function polar(magnitude: number, angleRad: number): Phasor {
+  return new Complex(magnitude * Math.cos(angleRad), magnitude * Math.sin(angleRad));
+}
+
+/** Phasor from magnitude and angle in degrees (exact at multiples of 90°). */
+export function polarDeg(magnitude: number, angleDeg: number): Phasor {
+  const turns = angleDeg / 90;
+  if (Number.isInteger(turns)) {
+    const q = ((turns % 4) + 4) % 4;
+    return q === 0 ? rect(magnitude, 0) : q === 1 ? rect(0, magnitude) : q === 2 ? rect(-magnitude, 0) : rect(0, -magnitude);
+  }
+  return polar(magnitude, angleDeg * DEG);
+}
+
+export const ZERO: Phasor = rect(0, 0);
+export const ONE: Phasor = rect(1, 0);
+/** The operator a = 1∠120°. */
+export const A_OP: Phasor = rect(-0.5, Math.sqrt(3) / 2);
+/** a² = 1∠240° = 1∠−120°. */
+export const A2_OP: Phasor = rect(-0.5, -Math.sqrt(3) / 2);
+
+export function degToRad(deg: number): number {
+  return deg * DEG;
+}
+export function radToDeg(rad: number): number {
+  return rad / DEG;
+}
+
+/** Magnitude |z|. */
+export function magnitude(z: Phasor): number {
+  return Math.hypot(z.re, z.im);
+}
+
+/** Angle in degrees in (−180, 180]; 0 for the zero phasor. */
+export function angleDeg(z: Phasor): number {
+  if (z.re === 0 && z.im === 0) return 0;
+  const d = Math.atan2(z.im, z.re) / DEG;
+  return d === -180 ? 180 : d;
+}
+
+/** Angle in radians in (−π, π]; 0 for the zero phasor. */
+export function angleRad(z: Phasor): number {
+  if (z.re === 0 && z.im === 0) return 0;
+  const r = Math.atan2(z.im, z.re);
+  return r === -Math.PI ? Math.PI : r;
+}
+
+export function isFinitePhasor(z: Phasor): boolean {
+  return Number.isFinite(z.re) && Number.isFinite(z.im);
+}
+
+/**
+ * Guard every computed phasor: a non-finite result is an error, never a value.
+ * `what` names the quantity for the message.
+ */
+export function finite(z: Phasor, what: string): Phasor {
+  if (!isFinitePhasor(z)) {
+    throw new PhzError(`${what} is not finite (a division by zero or an overflow): check for a zero impedance, an open circuit or a zero voltage in the inputs.`);
+  }
+  return z;
+}
+
+/**
+ * Phasor sum with cancellation snapped to zero: when the sum is below 1e-12 of the sum of
+ * the magnitudes added, it is rounding noise (a balanced set adds to exactly 0, but
+ * cos/sin of 120° are not exact in binary) and the result is 0.
+ */
+export function sumOf(zs: readonly Phasor[]): Phasor {
+  let re = 0;
+  let im = 0;
+  let scale = 0;
+  for (const z of zs) {
+    re += z.re;
+    im += z.im;
+    scale += Math.hypot(z.re, z.im);
+  }
+  return snapToZero(rect(re, im), scale);
+}
+
+/** `z`, or exactly 0 when |z| is within 1e-12 of `scale` (the size of what produced it). */
+export function snapToZero(z: Phasor, scale: number): Phasor {
+  return Math.hypot(z.re, z.im) <= 1e-12 * scale ? ZERO : z;
+}

@@ -1,0 +1,24 @@
+import { PhzError } from '../../core/errors';
+import { valueMessages as M } from '../../core/messages';
+import { defineFunction } from '../spec';
+import { phasorColumn, readDigits, readPhasors, zipWith } from '../readers';
+import { DIGITS, phasorParam } from '../params';
+
+/** Quotient a / b, row by row. */
+export const DIV = defineFunction({
+  name: 'DIV',
+  group: 'arithmetic',
+  summary: 'Quotient a / b, row by row (a single value is used for every row), e.g. I = V / Z.',
+  params: [phasorParam('a', 'Dividends'), phasorParam('b', 'Divisors (not 0)'), DIGITS],
+  result: 'Polar text, one row per pair.',
+  errors: ['A zero divisor, blank cells, text that is not a phasor, or different counts give #VALUE!.'],
+  examples: [{ formula: '=PHZ.DIV("230∠-120", "8+j6")', result: [['23∠-156.87°']] }],
+  implementation: (a, b, digits) => {
+    const d = readDigits(digits);
+    const bs = readPhasors(b, 'b');
+    bs.forEach((y, i) => {
+      if (y.re === 0 && y.im === 0) throw new PhzError(M.divideByZero(bs.length > 1 ? `b, row ${i + 1}` : 'b'));
+    });
+    return phasorColumn(zipWith(readPhasors(a, 'a'), 'a', bs, 'b', (x, y) => x.div(y)), d);
+  },
+});

@@ -1,0 +1,12 @@
+import type { FunctionSpec } from '../spec';
+import { SUM } from './sum';
+import { SUB } from './sub';
+import { MUL } from './mul';
+import { DIV } from './div';
+import { CONJ } from './conj';
+import { INV } from './inv';
+import { PARALLEL } from './parallel';
+import { ROTATE } from './rotate';
+
+/** The functions of group "arithmetic", in reference order. */
+export const arithmeticFunctions: FunctionSpec[] = [SUM, SUB, MUL, DIV, CONJ, INV, PARALLEL, ROTATE];

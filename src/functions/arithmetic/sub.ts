@@ -1,0 +1,17 @@
+import { sumOf } from '../../core/phasor';
+import { defineFunction } from '../spec';
+import { phasorColumn, readDigits, readPhasors, zipWith } from '../readers';
+import { DIGITS, phasorParam } from '../params';
+
+/** Difference a − b, row by row. */
+export const SUB = defineFunction({
+  name: 'SUB',
+  group: 'arithmetic',
+  summary: 'Difference a − b, row by row (a single value is used for every row), e.g. a line voltage from two phase voltages.',
+  params: [phasorParam('a', 'Phasors to subtract from'), phasorParam('b', 'Phasors to subtract'), DIGITS],
+  result: 'Polar text, one row per pair.',
+  errors: ['Blank cells, text that is not a phasor, or different counts (other than 1) give #VALUE!.'],
+  examples: [{ formula: '=PHZ.SUB("230∠0", "230∠-120")', result: [['398.372∠30°']] }],
+  implementation: (a, b, digits) =>
+    phasorColumn(zipWith(readPhasors(a, 'a'), 'a', readPhasors(b, 'b'), 'b', (x, y) => sumOf([x, y.neg()])), readDigits(digits)),
+});

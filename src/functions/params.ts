@@ -1,0 +1,29 @@
+/** Parameter specs shared by many functions, so their wording is the same everywhere. */
+import type { ParamSpec } from './spec';
+
+export const DIGITS: ParamSpec = {
+  name: 'digits',
+  type: 'scalar',
+  optional: true,
+  description: 'Significant figures of the text result, 1 to 15 (default 6).',
+};
+
+/** A phasor argument: one cell, a range of cells, or two numeric columns (real, imaginary). */
+export function phasorParam(name: string, what: string): ParamSpec {
+  return {
+    name,
+    type: 'matrix',
+    description: `${what}: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).`,
+  };
+}
+
+/** A repeating phasor argument: z1, z2, … each a cell, a range or a pair block. */
+export function repeatParam(name: string, what: string): ParamSpec {
+  return {
+    name,
+    type: 'repeat',
+    description: `${what}: one or more cells, ranges or values (blanks are skipped).`,
+  };
+}
+
+export const PHASOR_RESULT_NOTE = 'Polar text (magnitude∠angle°); one phasor per row when several are given.';

@@ -1,0 +1,303 @@
+/**
+ * Argument readers: what the host passes → phasors, numbers, choices; and phasors →
+ * what the host shows. Shapes, blanks, counting and broadcasting are handled here,
+ * once, so each function body stays a plain computation.
+ *
+ * Shape rules (DESIGN §3): a range with exactly two numeric columns is read row by row
+ * as (real, imaginary) pairs; every other range is read cell by cell, row by row.
+ * `null`, `undefined` and `""` are blank cells.
+ */
+import { PhzError, isPhzError } from '../core/errors';
+import { readerMessages as M } from '../core/messages';
+import { parsePhasor, type Quantity } from '../core/parse';
+import { rect, type Phasor } from '../core/phasor';
+import { formatPolar, formatRect, DEFAULT_DIGITS } from '../core/format';
+import type { HostCell, HostResult } from './spec';
+
+export interface PhasorReadOptions {
+  /** `skip` (sums, lists) or `error` (default: every phasor is required). */
+  readonly blanks?: 'skip' | 'error';
+  /** The quantity a unit word must name, if one is given. */
+  readonly expect?: Quantity;
+}
+
+/** True for a blank cell. Whitespace-only text counts as blank too. */
+export function isBlank(v: unknown): boolean {
+  if (v === null || v === undefined || v === '') return true;
+  if (typeof v === 'string') return v.trim() === '';
+  return false;
+}
+
+/** Any host argument as rows of cells: a scalar becomes 1×1, a flat list one row. */
+export function asMatrix(arg: unknown): unknown[][] {
+  if (Array.isArray(arg)) {
+    if (arg.length === 0) return [];
+    return Array.isArray(arg[0]) ? (arg as unknown[][]) : [arg];
+  }
+  return [[arg]];
+}
+
+function where(name: string, m: unknown[][], r: number, c: number): string {
+  const cells = m.length * (m[0]?.length ?? 0);
+  if (cells <= 1) return name;
+  if (m.length === 1) return `${name}, value ${c + 1}`;
+  if ((m[0]?.length ?? 0) === 1) return `${name}, row ${r + 1}`;
+  return `${name}, row ${r + 1} column ${c + 1}`;
+}
+
+/** One cell (known not blank) → phasor. */
+function cellPhasor(v: unknown, at: string, expect: Quantity | undefined): Phasor {
+  if (typeof v === 'number') {
+    if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
+    return rect(v, 0);
+  }
+  if (typeof v === 'string') {
+    try {
+      return parsePhasor(v, expect ? { expect } : undefined);
+    } catch (e) {
+      if (isPhzError(e)) throw new PhzError(M.inCell(at, e.message), e.code);
+      throw e;
+    }
+  }
+  if (typeof v === 'boolean') throw new PhzError(M.boolean(at));
+  if (typeof v === 'object' && v !== null && ('error' in v || 'type' in v || 'code' in v)) throw new PhzError(M.errorValue(at));
+  throw new PhzError(M.unsupported(at));
+}
+
+/** Two columns of numbers (blanks allowed) read as real/imaginary pairs. */
+function isPairBlock(m: unknown[][]): boolean {
+  if (m.length === 0 || m[0].length !== 2) return false;
+  let numbers = 0;
+  for (const row of m) {
+    for (let c = 0; c < 2; c++) {
+      const v = row[c];
+      if (typeof v === 'number') numbers++;
+      else if (!isBlank(v)) return false;
+    }
+  }
+  return numbers > 0;
+}
+
+/**
+ * Reads every phasor of one argument, in row order. With `blanks: 'skip'` blank cells
+ * are passed over; otherwise a blank is an error naming the cell.
+ */
+export function readPhasors(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor[] {
+  const m = asMatrix(arg);
+  const skip = options.blanks === 'skip';
+  const out: Phasor[] = [];
+  if (isPairBlock(m)) {
+    for (let r = 0; r < m.length; r++) {
+      const a = m[r][0];
+      const b = m[r][1];
+      const blankA = isBlank(a);
+      const blankB = isBlank(b);
+      if (blankA && blankB) {
+        if (skip) continue;
+        throw new PhzError(M.blankRequired(`${name}, row ${r + 1}`));
+      }
+      if (blankA || blankB) throw new PhzError(M.halfPair(name, r + 1));
+      const re = a as number;
+      const im = b as number;
+      if (!Number.isFinite(re) || !Number.isFinite(im)) throw new PhzError(M.notFinite(`${name}, row ${r + 1}`));
+      out.push(rect(re, im));
+    }
+    return out;
+  }
+  for (let r = 0; r < m.length; r++) {
+    const row = m[r];
+    for (let c = 0; c < row.length; c++) {
+      const v = row[c];
+      if (isBlank(v)) {
+        if (skip) continue;
+        throw new PhzError(M.blankRequired(where(name, m, r, c)));
+      }
+      out.push(cellPhasor(v, where(name, m, r, c), options.expect));
+    }
+  }
+  return out;
+}
+
+/** Reads at least one phasor (blanks skipped); an all-blank argument is an error. */
+export function readSomePhasors(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor[] {
+  const out = readPhasors(arg, name, { ...options, blanks: 'skip' });
+  if (out.length === 0) throw new PhzError(M.noPhasors(name));
+  return out;
+}
+
+/** Reads exactly one phasor. */
+export function readPhasor(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor {
+  const out = readPhasors(arg, name, options);
+  if (out.length !== 1) throw new PhzError(out.length === 0 ? M.blankRequired(name) : M.notOne(name, out.length));
+  return out[0];
+}
+
+/**
+ * Reads a repeating argument (ONE array of every value given, each a matrix) as one
+ * list of phasors, blanks skipped. `name` is the parameter's name, e.g. `z`: values are
+ * named z1, z2, … in messages.
+ */
+export function readRepeatedPhasors(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor[] {
+  const groups = Array.isArray(arg) ? (arg as unknown[]) : [arg];
+  // a caller that passes one matrix instead of a list of matrices
+  const list = groups.length > 0 && Array.isArray(groups[0]) && !Array.isArray((groups[0] as unknown[])[0]) ? [groups] : groups;
+  const out: Phasor[] = [];
+  list.forEach((g, k) => {
+    for (const z of readPhasors(g, `${name}${k + 1}`, { ...options, blanks: 'skip' })) out.push(z);
+  });
+  if (out.length === 0) throw new PhzError(M.noPhasors(name));
+  return out;
+}
+
+function describe(v: unknown): string {
+  if (typeof v === 'string') return `the text "${v.length > 40 ? v.slice(0, 37) + '…' : v}"`;
+  if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
+  if (Array.isArray(v)) return 'a range';
+  return String(v);
+}
+
+/** One scalar → number. Numeric text ("6") is accepted; a 1×1 matrix is unwrapped. */
+function toNumber(v: unknown, at: string): number | null {
+  if (Array.isArray(v)) {
+    const m = asMatrix(v);
+    if (m.length === 1 && m[0].length === 1) v = m[0][0];
+    else throw new PhzError(M.numberExpected(at, 'a range of several cells'));
+  }
+  if (isBlank(v)) return null;
+  if (typeof v === 'number') {
+    if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
+    return v;
+  }
+  if (typeof v === 'string') {
+    const t = v.trim().replace(',', '.');
+    const n = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t) ? Number(t) : NaN;
+    if (Number.isFinite(n)) return n;
+  }
+  throw new PhzError(M.numberExpected(at, describe(v)));
+}
+
+export interface NumberReadOptions {
+  /** Used when the argument is omitted or blank; without it a blank is an error. */
+  readonly default?: number;
+  readonly min?: number;
+  readonly max?: number;
+  /** The minimum itself is not allowed (e.g. power factor > 0). */
+  readonly minExclusive?: boolean;
+  readonly integer?: boolean;
+}
+
+function checkNumber(n: number, at: string, o: NumberReadOptions): number {
+  if (o.integer && !Number.isInteger(n)) throw new PhzError(M.wholeNumber(at, n));
+  const low = o.min !== undefined && (o.minExclusive ? n <= o.min : n < o.min);
+  const high = o.max !== undefined && n > o.max;
+  if (low || high) {
+    const lo = o.min === undefined ? '' : o.minExclusive ? `above ${o.min}` : `at least ${o.min}`;
+    const hi = o.max === undefined ? '' : `at most ${o.max}`;
+    throw new PhzError(M.outOfRange(at, n, [lo, hi].filter(Boolean).join(' and ')));
+  }
+  return n;
+}
+
+/** Reads one number. */
+export function readNumber(v: unknown, name: string, options: NumberReadOptions = {}): number {
+  const n = toNumber(v, name);
+  if (n === null) {
+    if (options.default !== undefined) return options.default;
+    throw new PhzError(M.numberRequired(name));
+  }
+  return checkNumber(n, name, options);
+}
+
+/** Reads every number of a range, in row order (blanks are errors unless `skipBlanks`). */
+export function readNumbers(arg: unknown, name: string, options: NumberReadOptions & { skipBlanks?: boolean } = {}): number[] {
+  const m = asMatrix(arg);
+  const out: number[] = [];
+  for (let r = 0; r < m.length; r++) {
+    for (let c = 0; c < m[r].length; c++) {
+      const at = where(name, m, r, c);
+      const n = toNumber(m[r][c], at);
+      if (n === null) {
+        if (options.skipBlanks) continue;
+        throw new PhzError(M.numberRequired(at));
+      }
+      out.push(checkNumber(n, at, options));
+    }
+  }
+  if (out.length === 0) throw new PhzError(M.numberRequired(name));
+  return out;
+}
+
+/** The optional `digits` argument: 1–15 significant figures, default 6. */
+export function readDigits(v: unknown): number {
+  return readNumber(v, 'digits', { default: DEFAULT_DIGITS, min: 1, max: 15, integer: true });
+}
+
+/** Reads one of a fixed set of words, case-insensitive; blank or omitted gives `fallback`. */
+export function readChoice<T extends string>(v: unknown, name: string, choices: readonly T[], fallback: T): T {
+  if (Array.isArray(v)) {
+    const m = asMatrix(v);
+    if (m.length === 1 && m[0].length === 1) v = m[0][0];
+  }
+  if (isBlank(v)) return fallback;
+  if (typeof v === 'string') {
+    const t = v.trim().toLowerCase();
+    for (const c of choices) if (c.toLowerCase() === t) return c;
+  }
+  throw new PhzError(M.choice(name, typeof v === 'string' ? v : describe(v), choices));
+}
+
+/** Reads TRUE/FALSE (also 1/0 and the words true/false); blank gives `fallback`. */
+export function readBoolean(v: unknown, name: string, fallback: boolean): boolean {
+  if (Array.isArray(v)) {
+    const m = asMatrix(v);
+    if (m.length === 1 && m[0].length === 1) v = m[0][0];
+  }
+  if (isBlank(v)) return fallback;
+  if (typeof v === 'boolean') return v;
+  if (v === 1 || v === 0) return v === 1;
+  if (typeof v === 'string') {
+    const t = v.trim().toLowerCase();
+    if (t === 'true') return true;
+    if (t === 'false') return false;
+  }
+  throw new PhzError(M.booleanExpected(name, describe(v)));
+}
+
+/**
+ * Element-wise count of several lists: equal counts, or 1 (broadcast to every row).
+ * Returns the common count.
+ */
+export function broadcastCount(lists: ReadonlyArray<readonly [string, number]>): number {
+  let n = 1;
+  for (const [, len] of lists) if (len !== 1) n = n === 1 ? len : n;
+  for (const [, len] of lists) {
+    if (len !== 1 && len !== n) throw new PhzError(M.counts(lists.map(([name, k]) => `${name}: ${k}`).join(', ')));
+  }
+  return n;
+}
+
+/** Applies `f` row by row over two lists with broadcasting. */
+export function zipWith<A, B, R>(a: readonly A[], nameA: string, b: readonly B[], nameB: string, f: (x: A, y: B) => R): R[] {
+  const n = broadcastCount([
+    [nameA, a.length],
+    [nameB, b.length],
+  ]);
+  const out: R[] = new Array(n);
+  for (let i = 0; i < n; i++) out[i] = f(a.length === 1 ? a[0] : a[i], b.length === 1 ? b[0] : b[i]);
+  return out;
+}
+
+/** A list of cells as an n×1 column. */
+export function column(cells: readonly HostCell[]): HostResult {
+  const out: HostResult = new Array(cells.length);
+  for (let i = 0; i < cells.length; i++) out[i] = [cells[i]];
+  return out;
+}
+
+/** Phasors as an n×1 column of polar (default) or rectangular text. */
+export function phasorColumn(zs: readonly Phasor[], digits: number, form: 'polar' | 'rect' = 'polar'): HostResult {
+  const fmt = form === 'polar' ? formatPolar : formatRect;
+  const out: HostResult = new Array(zs.length);
+  for (let i = 0; i < zs.length; i++) out[i] = [fmt(zs[i], digits)];
+  return out;
+}

@@ -1,0 +1,16 @@
+import { defineFunction } from '../spec';
+import { column, readPhasors } from '../readers';
+import { phasorParam } from '../params';
+
+/** Real part of each phasor, full precision. */
+export const RE = defineFunction({
+  name: 'RE',
+  group: 'values',
+  summary: 'Real part of each phasor (resistance of an impedance, active power of a complex power).',
+  params: [phasorParam('z', 'Phasors in any notation')],
+  result: 'Numbers at full precision; one row per phasor.',
+  errors: ['A blank cell or text that is not a phasor gives #VALUE! naming the cell.'],
+  examples: [{ formula: '=PHZ.RE("4-j2")', result: [[4]] },
+    { formula: '=PHZ.RE("10∠90")', result: [[0]] }],
+  implementation: (z) => column(readPhasors(z, 'z').map((p) => p.re)),
+});
