@@ -20,50 +20,117 @@ export const DEFAULT_DIGITS = 6;
 /** Parts smaller than this fraction of the magnitude are rounding noise. */
 export const NOISE = 1e-12;
 
+// exact powers of ten: scaling by them and rounding gives the correctly rounded result
+const POW10 = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];
+
 /** Number to shortest text at `digits` significant figures; never "-0". */
 export function formatNumber(x: number, digits: number = DEFAULT_DIGITS): string {
   if (x === 0) return '0';
+  const ax = x < 0 ? -x : x;
+  if (digits <= 15 && ax >= 1e-6 && ax < 1e15) {
+    const t = fastDigits(ax, digits);
+    if (t !== undefined) return t === '0' ? '0' : x < 0 ? '-' + t : t;
+  }
+  return slowDigits(x, digits);
+}
+
+/** The reference rounding: exact decimal rounding by toPrecision, then the shortest text. */
+export function slowDigits(x: number, digits: number): string {
   const r = Number(x.toPrecision(digits));
-  if (r === 0) return '0';
-  return String(r);
+  return r === 0 ? '0' : String(r);
+}
+
+/**
+ * Fast rounding for ordinary magnitudes: round |x|·10^k to an integer (10^k exact, so the
+ * scaled value is the correctly rounded product) and place the decimal point. Returns
+ * undefined near a rounding tie, where toPrecision's exact decimal decides. A property
+ * test checks it against `slowDigits`.
+ */
+function fastDigits(ax: number, digits: number): string | undefined {
+  let e = Math.floor(Math.log10(ax));
+  if (ax >= POW10[e + 1]) e++;
+  else if (ax < POW10[e]) e--;
+  let k = digits - 1 - e;
+  if (k < 0) {
+    if (-k > 22) return undefined;
+    const scaled = ax / POW10[-k];
+    const f = scaled - Math.floor(scaled);
+    if (f > 0.4999999 && f < 0.5000001) return undefined;
+    return String(Math.round(scaled) * POW10[-k]);
+  }
+  if (k > 22) return undefined;
+  const scaled = ax * POW10[k];
+  const f = scaled - Math.floor(scaled);
+  if (f > 0.4999999 && f < 0.5000001) return undefined;
+  let n = Math.round(scaled);
+  if (n === 0) return '0';
+  while (k > 0 && n % 10 === 0) {
+    n /= 10;
+    k--;
+  }
+  const str = String(n);
+  if (k === 0) return str;
+  if (str.length > k) return str.slice(0, str.length - k) + '.' + str.slice(str.length - k);
+  return '0.' + '0'.repeat(k - str.length) + str;
+}
+
+/** Magnitude without hypot's cost where squares cannot overflow or underflow. */
+function magOf(re: number, im: number): number {
+  const m = Math.sqrt(re * re + im * im);
+  return m > 1e-150 && m < 1e150 ? m : Math.hypot(re, im);
+}
+
+/** Polar text, e.g. `230∠-120°`. */
+export function formatPolar(z: Phasor, digits: number = DEFAULT_DIGITS): string {
+  assertFinite(z);
+  let re = z.re;
+  let im = z.im;
+  const m0 = magOf(re, im);
+  // a part within 1e-12 of the magnitude is noise
+  if (Math.abs(re) <= NOISE * m0) re = 0;
+  if (Math.abs(im) <= NOISE * m0) im = 0;
+  if (re === 0 && im === 0) return '0';
+  const mag = re === 0 ? Math.abs(im) : im === 0 ? Math.abs(re) : m0;
+  const ang = (Math.atan2(im, re) * 180) / Math.PI;
+  let angText = formatNumber(ang, digits);
+  // rounding may carry −179.9999… to −180, which is shown as 180
+  if (angText === '-180') angText = '180';
+  return formatNumber(mag, digits) + '\u2220' + angText + '\u00b0';
 }
 
 /** Drops parts that are noise relative to the magnitude. */
 function clean(z: Phasor): [number, number] {
   let re = z.re;
   let im = z.im;
-  const m = Math.hypot(re, im);
+  const m = magOf(re, im);
   if (Math.abs(re) <= NOISE * m) re = 0;
   if (Math.abs(im) <= NOISE * m) im = 0;
   return [re, im];
 }
 
-/** Polar text, e.g. `230∠-120°`. */
-export function formatPolar(z: Phasor, digits: number = DEFAULT_DIGITS): string {
-  assertFinite(z);
-  const [re, im] = clean(z);
-  if (re === 0 && im === 0) return '0';
-  const mag = Math.hypot(re, im);
-  const ang = (Math.atan2(im, re) * 180) / Math.PI;
-  let angText = formatNumber(ang, digits);
-  // rounding may carry −179.9999… to −180, which is shown as 180
-  if (angText === '-180') angText = '180';
-  return `${formatNumber(mag, digits)}\u2220${angText}\u00b0`;
+/** Decimal exponent of |x| (x ≠ 0) as printed: 1234 → 3, 0.05 → −2. */
+function exponentOf(x: number, digits: number): number {
+  const t = Math.abs(x).toExponential(digits - 1);
+  return Number(t.slice(t.indexOf('e') + 1));
 }
 
-/** Rounds x to `decimals` places (negative: to tens, hundreds …) and prints it. */
+/** Rounds x at the 10^−decimals place (decimals may be negative) and prints it shortest. */
 function atDecimals(x: number, decimals: number): string {
   if (x === 0) return '0';
+  // significant figures of x that reach down to the 10^−decimals place
+  const sig = exponentOf(x, 15) + decimals + 1;
   let r: number;
-  if (decimals >= 0) {
-    r = Number(x.toFixed(Math.min(decimals, 100)));
+  if (sig >= 1) {
+    r = Number(x.toPrecision(Math.min(sig, 17)));
+  } else if (sig === 0) {
+    // x is below one unit of that place: it rounds to 0 or to one unit
+    const unit = Number(`1e${-decimals}`);
+    r = Math.abs(x) >= unit / 2 ? Math.sign(x) * unit : 0;
   } else {
-    const p = Math.pow(10, -decimals);
-    r = Math.round(x / p) * p;
+    r = 0;
   }
   if (r === 0) return '0';
-  // the shortest text for the rounded value; toPrecision guards against binary tails
-  return String(Number(r.toPrecision(15)));
+  return String(r);
 }
 
 /** Rectangular text, e.g. `47.5498-j34.0565`, `-j3`, `4`. */
@@ -73,9 +140,7 @@ export function formatRect(z: Phasor, digits: number = DEFAULT_DIGITS): string {
   if (re === 0 && im === 0) return '0';
   const big = Math.max(Math.abs(re), Math.abs(im));
   // the decimal exponent of the larger part after rounding (9.9999996 → 1.00000e+1)
-  const exp = big.toExponential(digits - 1);
-  const e = Number(exp.slice(exp.indexOf('e') + 1));
-  const decimals = digits - 1 - e;
+  const decimals = digits - 1 - exponentOf(big, digits);
   const reText = atDecimals(re, decimals);
   const imAbs = atDecimals(Math.abs(im), decimals);
   if (imAbs === '0') return reText;

@@ -13,6 +13,7 @@
 import { PhzError } from './errors';
 import { polarDeg, polar, rect, type Phasor } from './phasor';
 import { parseMessages as M } from './messages/parse';
+import * as fast from './fastparse';
 
 /** The physical quantity a unit word names. */
 export type Quantity = 'voltage' | 'current' | 'impedance' | 'admittance' | 'power';
@@ -23,7 +24,6 @@ export interface ParseOptions {
 }
 
 const UNIT_WORDS: ReadonlyArray<readonly [string, Quantity]> = [
-  // longest first, so "var" is not read as "va" + "r"
   ['ohms', 'impedance'],
   ['ohm', 'impedance'],
   ['var', 'power'],
@@ -35,6 +35,8 @@ const UNIT_WORDS: ReadonlyArray<readonly [string, Quantity]> = [
   // Ω: both the Greek capital omega (U+03A9) and the ohm sign (U+2126) lower-case to ω
   ['\u03c9', 'impedance'],
 ];
+
+const UNIT_QUANTITY: Readonly<Record<string, Quantity>> = Object.fromEntries(UNIT_WORDS);
 
 const PREFIX: Readonly<Record<string, number>> = {
   p: 1e-12,
@@ -114,34 +116,34 @@ class Scanner {
     const s = this.s;
     const start = this.i;
     let i = start;
-    let digits = 0;
-    while (isDigit(s.charCodeAt(i))) {
-      i++;
-      digits++;
-    }
-    let text = s.slice(start, i);
+    while (isDigit(s.charCodeAt(i))) i++;
+    let digits = i - start;
+    let comma = -1;
     const c = s.charCodeAt(i);
     if (c === C_DOT || (c === C_COMMA && this.decimalComma)) {
+      if (c === C_COMMA) comma = i;
       i++;
       const f = i;
       while (isDigit(s.charCodeAt(i))) i++;
       digits += i - f;
-      text += '.' + s.slice(f, i);
     }
     if (digits === 0) return NaN;
     // exponent: e or E followed by digits (not "e^", which starts the exponential form)
-    if (lower(s.charCodeAt(i)) === 101) {
+    let uminus = false;
+    if ((s.charCodeAt(i) | 32) === 101) {
       let k = i + 1;
       const sc = s.charCodeAt(k);
       if (sc === C_PLUS || sc === C_MINUS || sc === C_UMINUS) k++;
       if (isDigit(s.charCodeAt(k))) {
-        const e0 = k;
+        uminus = sc === C_UMINUS;
         while (isDigit(s.charCodeAt(k))) k++;
-        text += 'e' + (sc === C_MINUS || sc === C_UMINUS ? '-' : '') + s.slice(e0, k);
         i = k;
       }
     }
     this.i = i;
+    let text = s.slice(start, i);
+    if (comma >= 0) text = text.replace(',', '.');
+    if (uminus) text = text.replace('\u2212', '-');
     return Number(text);
   }
   /**
@@ -151,6 +153,10 @@ class Scanner {
   unitScale(): number {
     const s = this.s;
     const at = this.i;
+    const c0 = s.charCodeAt(at);
+    // fast exit: units start with a letter, µ, μ or Ω
+    const letter = (c0 | 32) >= 97 && (c0 | 32) <= 122;
+    if (!letter && c0 !== 0xb5 && c0 !== 0x3bc && c0 !== 0x3a9 && c0 !== 0x2126 && c0 !== 0x3c9) return 1;
     for (let withPrefix = 1; withPrefix >= 0; withPrefix--) {
       let k = at;
       let scale = 1;
@@ -160,18 +166,20 @@ class Scanner {
         scale = p;
         k++;
       }
-      for (const [word, q] of UNIT_WORDS) {
-        if (s.length - k < word.length) continue;
-        if (s.slice(k, k + word.length).toLowerCase() !== word) continue;
-        const after = s.charCodeAt(k + word.length);
-        // the unit word must end here: not followed by another letter
-        if (after >= 65 && after <= 90) continue;
-        if (after >= 97 && after <= 122) continue;
-        if (this.unit !== null) throw this.fail(M.twoUnits);
-        this.unit = q;
-        this.i = k + word.length;
-        return scale;
+      let end = k;
+      while (end < s.length) {
+        const ch = s.charCodeAt(end);
+        const isWordChar = ((ch | 32) >= 97 && (ch | 32) <= 122) || ch === 0x3a9 || ch === 0x2126 || ch === 0x3c9;
+        if (!isWordChar) break;
+        end++;
       }
+      const word = s.slice(k, end).toLowerCase();
+      const q = UNIT_QUANTITY[word];
+      if (q === undefined) continue;
+      if (this.unit !== null) throw this.fail(M.twoUnits);
+      this.unit = q;
+      this.i = end;
+      return scale;
     }
     return 1;
   }
@@ -198,6 +206,7 @@ function angleValue(sc: Scanner): number {
     sc.i++;
     return value;
   }
+  if (sc.done) return value;
   const rest = sc.s.slice(sc.i, sc.i + 3).toLowerCase();
   if (rest === 'rad') {
     sc.i += 3;
@@ -255,6 +264,12 @@ function commaMode(text: string): boolean {
  * @example parsePhasor('230∠-120') // ≈ -115 - j199.186
  */
 export function parsePhasor(text: string, options?: ParseOptions): Phasor {
+  if (fast.fastParse(text)) return rect(fast.fastRe, fast.fastIm);
+  return parseGeneral(text, options);
+}
+
+/** The general scanner: every notation, with messages. Exported for the fast-path agreement test. */
+export function parseGeneral(text: string, options?: ParseOptions): Phasor {
   const sc = new Scanner(text, commaMode(text));
   sc.ws();
   if (sc.done) throw new PhzError(M.empty);

@@ -45,19 +45,24 @@ function where(name: string, m: unknown[][], r: number, c: number): string {
   return `${name}, row ${r + 1} column ${c + 1}`;
 }
 
-/** One cell (known not blank) → phasor. */
-function cellPhasor(v: unknown, at: string, expect: Quantity | undefined): Phasor {
-  if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
-    return rect(v, 0);
-  }
+/** One cell (known not blank) → phasor; `at` names the cell and is only built on an error. */
+function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, expect: Quantity | undefined): Phasor {
   if (typeof v === 'string') {
     try {
       return parsePhasor(v, expect ? { expect } : undefined);
     } catch (e) {
-      if (isPhzError(e)) throw new PhzError(M.inCell(at, e.message), e.code);
+      if (isPhzError(e)) throw new PhzError(M.inCell(where(name, m, r, col), e.message), e.code);
       throw e;
     }
+  }
+  return otherCellPhasor(v, where(name, m, r, col));
+}
+
+/** A cell that is not text: a finite number, or an error naming the cell. */
+function otherCellPhasor(v: unknown, at: string): Phasor {
+  if (typeof v === 'number') {
+    if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
+    return rect(v, 0);
   }
   if (typeof v === 'boolean') throw new PhzError(M.boolean(at));
   if (typeof v === 'object' && v !== null && ('error' in v || 'type' in v || 'code' in v)) throw new PhzError(M.errorValue(at));
@@ -85,6 +90,10 @@ function isPairBlock(m: unknown[][]): boolean {
 export function readPhasors(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor[] {
   const m = asMatrix(arg);
   const skip = options.blanks === 'skip';
+  // the most common call: one text cell
+  if (m.length === 1 && m[0].length === 1 && typeof m[0][0] === 'string' && m[0][0] !== '') {
+    return [cellPhasor(m[0][0], name, m, 0, 0, options.expect)];
+  }
   const out: Phasor[] = [];
   if (isPairBlock(m)) {
     for (let r = 0; r < m.length; r++) {
@@ -112,7 +121,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
         if (skip) continue;
         throw new PhzError(M.blankRequired(where(name, m, r, c)));
       }
-      out.push(cellPhasor(v, where(name, m, r, c), options.expect));
+      out.push(cellPhasor(v, name, m, r, c, options.expect));
     }
   }
   return out;
@@ -278,10 +287,15 @@ export function broadcastCount(lists: ReadonlyArray<readonly [string, number]>):
 
 /** Applies `f` row by row over two lists with broadcasting. */
 export function zipWith<A, B, R>(a: readonly A[], nameA: string, b: readonly B[], nameB: string, f: (x: A, y: B) => R): R[] {
-  const n = broadcastCount([
-    [nameA, a.length],
-    [nameB, b.length],
-  ]);
+  const n =
+    a.length === b.length || b.length === 1
+      ? a.length
+      : a.length === 1
+        ? b.length
+        : broadcastCount([
+            [nameA, a.length],
+            [nameB, b.length],
+          ]);
   const out: R[] = new Array(n);
   for (let i = 0; i < n; i++) out[i] = f(a.length === 1 ? a[0] : a[i], b.length === 1 ? b[0] : b[i]);
   return out;

@@ -11,6 +11,10 @@ const UNIT_OF: Record<Quantity, string> = {
   power: 'VA, W or var',
 };
 
+function article(word: string): string {
+  return /^[aeiou]/.test(word) ? 'an' : 'a';
+}
+
 function quote(text: string): string {
   return text.length > 60 ? `"${text.slice(0, 57)}…"` : `"${text}"`;
 }
@@ -39,7 +43,7 @@ export const parseMessages = {
     return `cannot read ${quote(text)}: the comma could be a thousands separator or a decimal comma; write 1000 or 1.000 (no thousands separators)`;
   },
   wrongQuantity(text: string, got: Quantity, expected: Quantity): string {
-    return `${quote(text)} is a ${got} but a ${expected} is expected here; give it in ${UNIT_OF[expected]} or without a unit`;
+    return `${quote(text)} is ${article(got)} ${got} but ${article(expected)} ${expected} is expected here; give it in ${UNIT_OF[expected]} or without a unit`;
   },
   tooLarge(text: string): string {
     return `${quote(text)} is too large to compute with; give a value below 1e300`;

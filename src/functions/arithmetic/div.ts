@@ -16,9 +16,9 @@ export const DIV = defineFunction({
   implementation: (a, b, digits) => {
     const d = readDigits(digits);
     const bs = readPhasors(b, 'b');
-    bs.forEach((y, i) => {
-      if (y.re === 0 && y.im === 0) throw new PhzError(M.divideByZero(bs.length > 1 ? `b, row ${i + 1}` : 'b'));
-    });
+    for (let i = 0; i < bs.length; i++) {
+      if (bs[i].re === 0 && bs[i].im === 0) throw new PhzError(M.divideByZero(bs.length > 1 ? `b, row ${i + 1}` : 'b'));
+    }
     return phasorColumn(zipWith(readPhasors(a, 'a'), 'a', bs, 'b', (x, y) => x.div(y)), d);
   },
 });

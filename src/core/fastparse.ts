@@ -1,0 +1,131 @@
+/**
+ * Fast path of the parser for the two most common notations, plain rectangular
+ * (`-115-j199.186`, `8+j6`, `4+2j`, `7`) and plain polar in degrees (`230∠-120`, `230∠-120°`,
+ * `230<-120`, `230@-120`), ASCII digits, no unit, no decimal comma. It returns false for
+ * anything else, and `parsePhasor` then runs the general scanner. A property test checks
+ * that both paths agree on every text the fast path accepts.
+ */
+let pos = 0;
+
+/** The same factor as the general path (src/core/phasor.ts), so both give identical bits. */
+const DEG = Math.PI / 180;
+
+// exact powers of ten for the correctly rounded fast conversion (Clinger's fast path)
+const POW10 = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];
+
+/** Unsigned decimal at `pos` (digits, optional point, optional exponent); NaN when none. */
+function num(s: string): number {
+  const start = pos;
+  let i = pos;
+  let mant = 0;
+  let nd = 0; // significant digits accumulated
+  let c = s.charCodeAt(i);
+  while (c >= 48 && c <= 57) {
+    mant = mant * 10 + (c - 48);
+    nd++;
+    c = s.charCodeAt(++i);
+  }
+  let frac = 0;
+  if (c === 46) {
+    c = s.charCodeAt(++i);
+    while (c >= 48 && c <= 57) {
+      mant = mant * 10 + (c - 48);
+      frac++;
+      c = s.charCodeAt(++i);
+    }
+  }
+  if (nd + frac === 0) return NaN;
+  if ((c | 32) === 101) {
+    // an exponent, or the start of e^(…): leave both to the general scanner
+    return NaN;
+  }
+  pos = i;
+  if (nd + frac <= 15 && frac <= 22) return mant / POW10[frac];
+  return Number(s.slice(start, i));
+}
+
+function spaces(s: string): void {
+  while (s.charCodeAt(pos) === 32) pos++;
+}
+
+/** Parts of the last successful `fastParse`. */
+export let fastRe = 0;
+export let fastIm = 0;
+
+function ok(re: number, im: number): true {
+  fastRe = re;
+  fastIm = im;
+  return true;
+}
+
+/** True (parts in fastRe, fastIm) for the common notations, false for anything else. */
+export function fastParse(s: string): boolean {
+  pos = 0;
+  spaces(s);
+  let c = s.charCodeAt(pos);
+  let neg = false;
+  if (c === 45 || c === 43) {
+    neg = c === 45;
+    pos++;
+    spaces(s);
+  }
+  const a = num(s);
+  if (a !== a) return false; // NaN: not a plain number here
+  const first = neg ? -a : a;
+  spaces(s);
+  c = s.charCodeAt(pos);
+  if (pos === s.length) return ok(first, 0);
+  if (c === 0x2220 || c === 60 || c === 64) {
+    // polar in degrees
+    pos++;
+    spaces(s);
+    c = s.charCodeAt(pos);
+    let an = false;
+    if (c === 45 || c === 43) {
+      an = c === 45;
+      pos++;
+      spaces(s);
+    }
+    const d = num(s);
+    if (d !== d) return false;
+    spaces(s);
+    if (s.charCodeAt(pos) === 0xb0) {
+      pos++;
+      spaces(s);
+    }
+    if (pos !== s.length || neg) return false;
+    const deg = an ? -d : d;
+    const turns = deg / 90;
+    if (turns === Math.trunc(turns)) return false; // exact quadrant values: general path
+    const r = deg * DEG;
+    return ok(a * Math.cos(r), a * Math.sin(r));
+  }
+  if ((c | 32) === 106 || (c | 32) === 105) {
+    // 4j
+    pos++;
+    spaces(s);
+    return pos === s.length ? ok(0, first) : false;
+  }
+  if (c !== 43 && c !== 45) return false;
+  const imNeg = c === 45;
+  pos++;
+  spaces(s);
+  c = s.charCodeAt(pos);
+  let b: number;
+  if ((c | 32) === 106 || (c | 32) === 105) {
+    pos++;
+    spaces(s);
+    b = num(s);
+    if (b !== b) return false;
+  } else {
+    b = num(s);
+    if (b !== b) return false;
+    spaces(s);
+    c = s.charCodeAt(pos);
+    if ((c | 32) !== 106 && (c | 32) !== 105) return false;
+    pos++;
+  }
+  spaces(s);
+  if (pos !== s.length) return false;
+  return ok(first, imNeg ? -b : b);
+}

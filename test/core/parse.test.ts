@@ -1,0 +1,126 @@
+import { describe, it, expect } from 'vitest';
+import { parsePhasor } from '../../src/core/parse';
+import { expectPhasorClose, expectPhzError } from '../helpers';
+
+const c30 = Math.cos(Math.PI / 6);
+const r = (re: number, im: number) => ({ re, im });
+const pd = (m: number, deg: number) => r(m * Math.cos((deg * Math.PI) / 180), m * Math.sin((deg * Math.PI) / 180));
+
+// Every notation of DESIGN §3, with the value it stands for.
+describe('parsePhasor reads every notation', () => {
+  it.each([
+    // rectangular
+    ['4+j2', r(4, 2)],
+    ['4+2j', r(4, 2)],
+    ['4+2i', r(4, 2)],
+    ['4+J2', r(4, 2)],
+    ['4+2I', r(4, 2)],
+    ['4 - j 2', r(4, -2)],
+    ['  4  -  2 j  ', r(4, -2)],
+    ['-j3', r(0, -3)],
+    ['j', r(0, 1)],
+    ['-j', r(0, -1)],
+    ['+j', r(0, 1)],
+    ['j2+4', r(4, 2)],
+    ['2.5e-3+j1e-2', r(0.0025, 0.01)],
+    ['1E3-j2E+2', r(1000, -200)],
+    ['.5+j.25', r(0.5, 0.25)],
+    ['5.', r(5, 0)],
+    ['\u22125\u2212j2', r(-5, -2)],
+    ['4+-j2', r(4, -2)],
+    ['4+j-2', r(4, -2)],
+    ['-7', r(-7, 0)],
+    ['0', r(0, 0)],
+    // polar, degrees by default
+    ['230∠-120', pd(230, -120)],
+    ['230∠-120°', pd(230, -120)],
+    ['230 ∠ -120 °', pd(230, -120)],
+    ['230<-120', pd(230, -120)],
+    ['230@-120', pd(230, -120)],
+    ['230∠\u2212120', pd(230, -120)],
+    ['230∠30deg', pd(230, 30)],
+    ['1∠0.5rad', r(Math.cos(0.5), Math.sin(0.5))],
+    ['1∠0.5 RAD', r(Math.cos(0.5), Math.sin(0.5))],
+    ['10∠90', r(0, 10)],
+    ['10∠-90', r(0, -10)],
+    ['10∠180', r(-10, 0)],
+    ['10∠270', r(0, -10)],
+    // exponential
+    ['230e^(j30)', r(230 * c30, 115)],
+    ['230e^(-j30°)', r(230 * c30, -115)],
+    ['230 E^( j 30 )', r(230 * c30, 115)],
+    ['2e^(j0.5rad)', r(2 * Math.cos(0.5), 2 * Math.sin(0.5))],
+    ['e^(j90)', r(0, 1)],
+    ['1.5e2e^(j90)', r(0, 150)],
+    // decimal comma
+    ['4,5+j2,25', r(4.5, 2.25)],
+    ['230,5∠-120', pd(230.5, -120)],
+    ['0,25', r(0.25, 0)],
+    // units with SI prefix: the prefix scales, the word is checked
+    ['11 kV∠0', r(11000, 0)],
+    ['11kV∠30', pd(11000, 30)],
+    ['4+j2 Ω', r(4, 2)],
+    ['4+j2 \u2126', r(4, 2)],
+    ['4+j2 ohm', r(4, 2)],
+    ['4+j2 Ohms', r(4, 2)],
+    ['250 mΩ', r(0.25, 0)],
+    ['250mohm', r(0.25, 0)],
+    ['230 V', r(230, 0)],
+    ['5 A∠-30', pd(5, -30)],
+    ['230∠-120° V', pd(230, -120)],
+    ['12 µA', r(12e-6, 0)],
+    ['12 uA', r(12e-6, 0)],
+    ['3 MVA', r(3e6, 0)],
+    ['3 mVA', r(3e-3, 0)],
+    ['40 kvar', r(40000, 0)],
+    ['40+j30 kVA', r(40000, 30000)],
+    ['2 MW', r(2e6, 0)],
+    ['5 mS', r(0.005, 0)],
+    ['2 kΩ e^(j45)', pd(2000, 45)],
+  ])('%s', (text, expected) => {
+    expectPhasorClose(parsePhasor(text), expected, 1e-12);
+  });
+
+  it('gives exact parts at multiples of 90° so RE and IM show clean zeros', () => {
+    const z = parsePhasor('10∠90');
+    expect(z.re).toBe(0);
+    expect(z.im).toBe(10);
+  });
+});
+
+describe('parsePhasor refuses malformed text with what was read, where it stopped and a valid form', () => {
+  it.each([
+    ['', /empty/],
+    ['   ', /empty/],
+    ['4+k2', /stopped at "k2" \(character 3\)/],
+    ['abc', /stopped at "abc" \(character 1\)/],
+    ['230∠', /stopped at the end.*angle/],
+    ['230∠abc', /angle/],
+    ['3+j4+5', /stopped at "\+5"/],
+    ['3+j4j', /stopped at "j"/],
+    ['4j+2j', /two imaginary parts/],
+    ['4+5', /two real parts/],
+    ['e^(30)', /e\^\(j30\)/],
+    ['230e^(j30', /closing "\)"/],
+    ['2 kΩ∠30 V', /one unit/],
+    ['5 furlongs', /not part of a phasor or a known unit/],
+    ['4.5,2', /mixes a decimal comma and a decimal point/],
+    ['1,000', /thousands separator/],
+    ['1e400', /too large/],
+    ['Infinity', /stopped at "nfinity"/],
+    ['NaN', /number was expected/],
+    ['--4', /number was expected/],
+  ])('%j', (text, pattern) => {
+    const err = expectPhzError(() => parsePhasor(text));
+    expect(err.message).toMatch(pattern);
+    // every message shows a valid form to copy
+    if (!/separator|one decimal|too large/.test(err.message)) expect(err.message).toMatch(/4\+j2, 230∠-120/);
+  });
+
+  it('checks the unit word against the quantity the argument expects', () => {
+    expect(parsePhasor('4+j2 Ω', { expect: 'impedance' }).re).toBe(4);
+    expect(parsePhasor('4+j2', { expect: 'impedance' }).re).toBe(4);
+    const err = expectPhzError(() => parsePhasor('230 V', { expect: 'impedance' }));
+    expect(err.message).toBe('"230 V" is a voltage but an impedance is expected here; give it in Ω or without a unit');
+  });
+});

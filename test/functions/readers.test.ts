@@ -1,0 +1,158 @@
+import { describe, it, expect } from 'vitest';
+import {
+  readPhasors,
+  readPhasor,
+  readSomePhasors,
+  readRepeatedPhasors,
+  readNumber,
+  readNumbers,
+  readDigits,
+  readChoice,
+  readBoolean,
+  zipWith,
+  isBlank,
+  asMatrix,
+} from '../../src/functions/readers';
+import { expectPhasorClose, expectPhzError } from '../helpers';
+
+describe('readPhasors: shapes of DESIGN §3', () => {
+  it('reads one text cell', () => {
+    const [z] = readPhasors([['4+j2']], 'z');
+    expectPhasorClose(z, { re: 4, im: 2 });
+  });
+  it('reads a scalar as one cell', () => {
+    expect(readPhasors('4+j2', 'z')).toHaveLength(1);
+    expect(readPhasors(5, 'z')[0].re).toBe(5);
+  });
+  it('reads a number as a real phasor', () => {
+    expectPhasorClose(readPhasors([[7.5]], 'z')[0], { re: 7.5, im: 0 });
+  });
+  it('reads two numeric columns row by row as real/imaginary pairs', () => {
+    const zs = readPhasors([[4, 2], [1, -3], [0, 5]], 'z');
+    expect(zs.map((z) => [z.re, z.im])).toEqual([[4, 2], [1, -3], [0, 5]]);
+  });
+  it('reads one row of two numbers as a pair', () => {
+    expect(readPhasors([[3, 4]], 'z').map((z) => [z.re, z.im])).toEqual([[3, 4]]);
+  });
+  it('reads a column of text cell by cell', () => {
+    expect(readPhasors([['1'], ['j'], ['2∠90']], 'z')).toHaveLength(3);
+  });
+  it('reads two columns holding text cell by cell, row by row', () => {
+    const zs = readPhasors([['1', 'j2'], [3, '4']], 'z');
+    expect(zs.map((z) => [z.re, z.im])).toEqual([[1, 0], [0, 2], [3, 0], [4, 0]]);
+  });
+  it('reads three numeric columns cell by cell', () => {
+    expect(readPhasors([[1, 2, 3]], 'z').map((z) => z.re)).toEqual([1, 2, 3]);
+  });
+  it('skips blanks (null, "", whitespace) when asked, in cells and in pair rows', () => {
+    expect(readPhasors([['1'], [null], [''], ['  '], ['2']], 'z', { blanks: 'skip' })).toHaveLength(2);
+    expect(readPhasors([[1, 2], [null, null], [3, 4]], 'z', { blanks: 'skip' })).toHaveLength(2);
+  });
+  it('names the blank cell when a phasor is required', () => {
+    expect(expectPhzError(() => readPhasors([['1'], [null]], 'impedances')).message).toBe(
+      'impedances, row 2 is blank: a phasor is required here; enter a value such as 230∠0 or 4+j2',
+    );
+    expect(expectPhzError(() => readPhasors([['1', 'x', '2']], 'z')).message).toMatch(/^z, value 2: cannot read "x"/);
+    expect(expectPhzError(() => readPhasors([['1', '2', '3'], ['4', '', '6']], 'z')).message).toMatch(/^z, row 2 column 2 is blank/);
+  });
+  it('refuses half a pair', () => {
+    expect(expectPhzError(() => readPhasors([[1, 2], [3, null]], 'z')).message).toBe(
+      'row 2 of z has one part of a real/imaginary pair but not the other: enter 0 for a zero part',
+    );
+  });
+  it('refuses booleans, error values and other objects with the cell named', () => {
+    expect(expectPhzError(() => readPhasors([[true]], 'z')).message).toMatch(/^z is TRUE\/FALSE/);
+    expect(expectPhzError(() => readPhasors([[{ type: 'VALUE' }]], 'z')).message).toMatch(/error value/);
+    expect(expectPhzError(() => readPhasors([[Symbol.iterator as unknown]], 'z')).message).toMatch(/neither a number nor text/);
+    expect(expectPhzError(() => readPhasors([[Infinity]], 'z')).message).toMatch(/not a finite number/);
+  });
+  it('passes the expected quantity to the parser', () => {
+    expect(expectPhzError(() => readPhasors([['230 V']], 'impedance', { expect: 'impedance' })).message).toMatch(
+      /^impedance: "230 V" is a voltage/,
+    );
+  });
+});
+
+describe('single, some and repeated phasors', () => {
+  it('readPhasor wants exactly one', () => {
+    expect(readPhasor([['2']], 'z').re).toBe(2);
+    expect(expectPhzError(() => readPhasor([['1'], ['2']], 'z')).message).toMatch(/must be one phasor but holds 2/);
+    expect(expectPhzError(() => readPhasor([[null]], 'z')).message).toMatch(/is blank/);
+  });
+  it('readSomePhasors refuses an all-blank range', () => {
+    expect(expectPhzError(() => readSomePhasors([[null], ['']], 'z')).message).toMatch(/holds no phasor/);
+  });
+  it('readRepeatedPhasors flattens every value given, names them z1, z2 …', () => {
+    expect(readRepeatedPhasors([[['1']], [['2'], ['3']], [[4, 5]]], 'z')).toHaveLength(4);
+    expect(expectPhzError(() => readRepeatedPhasors([[['1']], [['bad']]], 'z')).message).toMatch(/^z2: cannot read "bad"/);
+    expect(expectPhzError(() => readRepeatedPhasors([[[null]]], 'z')).message).toMatch(/holds no phasor/);
+  });
+});
+
+describe('numbers, digits, choices and booleans', () => {
+  it('readNumber accepts numbers and numeric text, applies defaults and ranges', () => {
+    expect(readNumber(3, 'n')).toBe(3);
+    expect(readNumber(' 2.5 ', 'n')).toBe(2.5);
+    expect(readNumber('2,5', 'n')).toBe(2.5);
+    expect(readNumber(null, 'n', { default: 7 })).toBe(7);
+    expect(readNumber([[4]], 'n')).toBe(4);
+    expect(expectPhzError(() => readNumber('abc', 'power_factor')).message).toBe(
+      'power_factor must be a number but is the text "abc": give a plain number',
+    );
+    expect(expectPhzError(() => readNumber(0, 'pf', { min: 0, minExclusive: true, max: 1 })).message).toBe(
+      'pf is 0 but must be above 0 and at most 1',
+    );
+    expect(expectPhzError(() => readNumber(null, 'n')).message).toMatch(/is blank: a number is required/);
+    expect(expectPhzError(() => readNumber([[1, 2]], 'n')).message).toMatch(/a range of several cells/);
+  });
+  it('readNumbers reads a column and names the bad cell', () => {
+    expect(readNumbers([[1], [2], [3]], 'angle')).toEqual([1, 2, 3]);
+    expect(expectPhzError(() => readNumbers([[1], ['x']], 'angle')).message).toMatch(/^angle, row 2 must be a number/);
+    expect(expectPhzError(() => readNumbers([[1], [null]], 'angle')).message).toMatch(/^angle, row 2 is blank/);
+  });
+  it('readDigits is 1–15, whole, default 6', () => {
+    expect(readDigits(null)).toBe(6);
+    expect(readDigits(undefined)).toBe(6);
+    expect(readDigits(15)).toBe(15);
+    expect(expectPhzError(() => readDigits(16)).message).toBe('digits is 16 but must be at least 1 and at most 15');
+    expect(expectPhzError(() => readDigits(2.5)).message).toBe('digits is 2.5 but must be a whole number');
+  });
+  it('readChoice is case-insensitive and lists the choices', () => {
+    expect(readChoice('RAD', 'unit', ['deg', 'rad'], 'deg')).toBe('rad');
+    expect(readChoice(null, 'unit', ['deg', 'rad'], 'deg')).toBe('deg');
+    expect(expectPhzError(() => readChoice('grad', 'unit', ['deg', 'rad'], 'deg')).message).toBe(
+      'unit is "grad", which is not one of "deg", "rad": use one of those (any case)',
+    );
+  });
+  it('readBoolean accepts TRUE/FALSE, 1/0 and the words', () => {
+    expect(readBoolean(true, 'b', false)).toBe(true);
+    expect(readBoolean(0, 'b', true)).toBe(false);
+    expect(readBoolean('True', 'b', false)).toBe(true);
+    expect(readBoolean(null, 'b', true)).toBe(true);
+    expect(expectPhzError(() => readBoolean('yes', 'leading', false)).message).toBe('leading must be TRUE or FALSE but is the text "yes"');
+  });
+});
+
+describe('element-wise pairing and broadcasting', () => {
+  it('pairs equal counts and broadcasts a single value', () => {
+    expect(zipWith([1, 2, 3], 'a', [10], 'b', (x, y) => x + y)).toEqual([11, 12, 13]);
+    expect(zipWith([1], 'a', [10, 20], 'b', (x, y) => x + y)).toEqual([11, 21]);
+    expect(zipWith([1, 2], 'a', [10, 20], 'b', (x, y) => x * y)).toEqual([10, 40]);
+  });
+  it('refuses unequal counts, naming both', () => {
+    expect(expectPhzError(() => zipWith([1, 2], 'a', [1, 2, 3], 'b', (x, y) => x + y)).message).toBe(
+      'the arguments hold different numbers of values (a: 2, b: 3): give equal counts, or a single value to use for every row',
+    );
+  });
+});
+
+describe('blank and matrix helpers', () => {
+  it.each([[null, true], [undefined, true], ['', true], [' ', true], [0, false], ['0', false], [false, false]])('isBlank(%j) = %j', (v, b) => {
+    expect(isBlank(v)).toBe(b);
+  });
+  it('asMatrix wraps scalars and flat lists', () => {
+    expect(asMatrix(3)).toEqual([[3]]);
+    expect(asMatrix([1, 2])).toEqual([[1, 2]]);
+    expect(asMatrix([[1], [2]])).toEqual([[1], [2]]);
+  });
+});
