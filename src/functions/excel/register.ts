@@ -1,0 +1,84 @@
+/**
+ * Excel registration: associates every registry entry with its custom-function id and is
+ * the only place a project error becomes a host error. The metadata (functions.json)
+ * comes from the generated declarations.ts, which the runtime does not import, so each
+ * function is associated exactly once, here.
+ */
+import { functions } from '../index';
+import type { HostResult } from '../spec';
+import { isPhzError } from '../../core/errors';
+
+/**
+ * Longest error message we hand to the host. Office documents no limit for
+ * `CustomFunctions.Error` messages, but Excel on Mac has been reported to cut them at
+ * about 255 characters (OfficeDev/office-js issue #4133); keeping every message within
+ * that length makes all platforms show the same text.
+ */
+export const HOST_MESSAGE_LIMIT = 255;
+
+/** Shown when something other than a `PhzError` escapes an implementation. */
+export const GENERIC_MESSAGE =
+  'Starpoint could not compute this result (internal error). Check the arguments; if they are valid, please report the formula.';
+
+type Implementation = (...args: any[]) => HostResult;
+
+/** Cuts a message to the host limit, ending with an ellipsis when shortened. */
+export function fitHostMessage(message: string): string {
+  const text = message.trim() || GENERIC_MESSAGE;
+  if (text.length <= HOST_MESSAGE_LIMIT) return text;
+  // Do not split a surrogate pair (e.g. an emoji or a rare symbol) at the cut.
+  let end = HOST_MESSAGE_LIMIT - 1;
+  const code = text.charCodeAt(end - 1);
+  if (code >= 0xd800 && code <= 0xdbff) end--;
+  return `${text.slice(0, end)}…`;
+}
+
+/**
+ * The host error for anything thrown by an implementation: a `PhzError` keeps its code
+ * (`invalidValue` → #VALUE!, `notAvailable` → #N/A) and message; anything else becomes
+ * #VALUE! with a generic message, so no raw exception text reaches a cell.
+ */
+export function toHostError(e: unknown): CustomFunctions.Error {
+  if (isPhzError(e)) {
+    const code = e.code === 'notAvailable' ? CustomFunctions.ErrorCode.notAvailable : CustomFunctions.ErrorCode.invalidValue;
+    return new CustomFunctions.Error(code, fitHostMessage(e.message));
+  }
+  return new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidValue, GENERIC_MESSAGE);
+}
+
+/** Wraps one implementation for Excel: same arguments and result, host errors on failure. */
+export function hostWrapper(name: string, implementation: Implementation): Implementation {
+  const wrapped = (...args: any[]): HostResult => {
+    try {
+      return implementation(...args);
+    } catch (e) {
+      throw toHostError(e);
+    }
+  };
+  Object.defineProperty(wrapped, 'name', { value: `PHZ.${name}` });
+  return wrapped;
+}
+
+/**
+ * Calls a registry function by name with the host's arguments, mapping errors as Excel
+ * would. The generated declarations use it so their bodies match what is registered.
+ */
+export function invoke(name: string, args: readonly unknown[]): HostResult {
+  const implementation = functions[name];
+  if (!implementation) {
+    throw new CustomFunctions.Error(CustomFunctions.ErrorCode.notAvailable, fitHostMessage(`PHZ.${name} is not in this version of Starpoint.`));
+  }
+  return hostWrapper(name, implementation)(...args);
+}
+
+/**
+ * Associates every function of `registry` (default: the project registry) with Excel and
+ * returns the names associated. Call once per runtime, before Excel evaluates a function.
+ */
+export function registerAll(registry: Readonly<Record<string, Implementation>> = functions): string[] {
+  const names = Object.keys(registry);
+  for (const name of names) {
+    CustomFunctions.associate(name, hostWrapper(name, registry[name]));
+  }
+  return names;
+}

@@ -1,0 +1,250 @@
+/**
+ * The task pane UI: a searchable reference of every PHZ function with an Insert button
+ * that writes the function's example formula into the active cell through a
+ * WorkbookPort. Touches no Office global, so the preview mounts it with its own port.
+ */
+import paneCss from './pane.css?raw';
+import { specs as registrySpecs } from '../functions/index';
+import type { FunctionSpec } from '../functions/spec';
+import type { WorkbookPort } from './port';
+import { buildReference, countEntries, type ReferenceEntry, type ReferenceExample } from './reference';
+
+const STYLE_ID = 'starpoint-pane-style';
+
+export interface PaneHandle {
+  /** The pane's outer element (inside `root`). */
+  readonly element: HTMLElement;
+  /** Sets the search text and filters the reference, as if typed. */
+  search(query: string): void;
+  /** Empties `root`. */
+  unmount(): void;
+}
+
+export interface PaneOptions {
+  /** The functions to list; defaults to the project registry. */
+  readonly specs?: readonly FunctionSpec[];
+}
+
+let mountCount = 0;
+
+type Child = Node | string | null | undefined | false;
+
+/** Tiny element builder bound to the root's document (no global `document`). */
+function builder(doc: Document) {
+  return function h<K extends keyof HTMLElementTagNameMap>(
+    tag: K,
+    props: { className?: string; text?: string; attrs?: Record<string, string> } = {},
+    ...children: Child[]
+  ): HTMLElementTagNameMap[K] {
+    const el = doc.createElement(tag);
+    if (props.className) el.className = props.className;
+    if (props.text !== undefined) el.textContent = props.text;
+    for (const [k, v] of Object.entries(props.attrs ?? {})) el.setAttribute(k, v);
+    for (const c of children) {
+      if (c === null || c === undefined || c === false) continue;
+      el.append(c);
+    }
+    return el;
+  };
+}
+
+function ensureStyle(doc: Document): void {
+  if (doc.getElementById(STYLE_ID)) return;
+  const style = doc.createElement('style');
+  style.id = STYLE_ID;
+  style.textContent = paneCss;
+  doc.head.append(style);
+}
+
+/** Mounts the pane into `root` (replacing its content). `port` null: reference only. */
+export function mountPane(root: HTMLElement, port: WorkbookPort | null, options: PaneOptions = {}): PaneHandle {
+  const doc = root.ownerDocument;
+  const h = builder(doc);
+  const specs = options.specs ?? registrySpecs;
+  const id = `sp${++mountCount}`;
+  ensureStyle(doc);
+
+  const searchInput = h('input', {
+    className: 'sp-search',
+    attrs: { id: `${id}-search`, type: 'search', autocomplete: 'off', spellcheck: 'false', placeholder: 'name or word, e.g. neutral' },
+  });
+  const count = h('p', { className: 'sp-count', attrs: { id: `${id}-count`, 'aria-live': 'polite' } });
+  const list = h('div', { className: 'sp-list' });
+  const noPortNote = port
+    ? null
+    : h('p', {
+        className: 'sp-note',
+        attrs: { id: `${id}-noport` },
+        text: 'Inserting needs a workbook: open this pane from Excel or in the preview workbook. The reference below works everywhere.',
+      });
+
+  function renderExample(ex: ReferenceExample): HTMLElement {
+    const single = ex.rows.length === 1 && ex.rows[0].length === 1;
+    const result = single
+      ? h('code', { className: 'sp-result', text: ex.rows[0][0] })
+      : h(
+          'table',
+          { className: 'sp-result-grid' },
+          h('caption', { className: 'sp-visually-hidden', text: `Result of ${ex.formula}` }),
+          h('tbody', {}, ...ex.rows.map((row) => h('tr', {}, ...row.map((cell) => h('td', { text: cell }))))),
+        );
+    return h(
+      'div',
+      { className: 'sp-example' },
+      h('code', { className: 'sp-formula', text: ex.formula }),
+      h('span', { className: 'sp-gives', text: single ? ' gives ' : ' spills ' }),
+      result,
+    );
+  }
+
+  async function insert(entry: ReferenceEntry, status: HTMLElement, button: HTMLButtonElement): Promise<void> {
+    if (!port) return;
+    button.disabled = true;
+    status.textContent = 'Inserting…';
+    try {
+      const cell = await port.getActiveCell();
+      const where = `${cell.sheet}!${cell.address}`;
+      if (cell.formula !== '') {
+        status.textContent = `${where} is not empty, so nothing was written. Select an empty cell and try again.`;
+      } else {
+        await port.setActiveCellFormula(entry.starter);
+        status.textContent = `Inserted ${entry.starter} into ${where}. Edit its arguments to use your own cells.`;
+      }
+    } catch (e) {
+      status.textContent = `Could not insert into the ${port.hostName} workbook: ${e instanceof Error ? e.message : String(e)}`;
+    } finally {
+      button.disabled = false;
+    }
+  }
+
+  function renderEntry(entry: ReferenceEntry): HTMLElement {
+    const headingId = `${id}-fn-${entry.name}`;
+    const status = h('p', { className: 'sp-status', attrs: { role: 'status' } });
+    const button = h('button', {
+      className: 'sp-insert',
+      text: 'Insert',
+      attrs: {
+        type: 'button',
+        'aria-label': `Insert ${entry.starter} into the active cell`,
+        ...(port ? {} : { 'aria-describedby': `${id}-noport` }),
+      },
+    });
+    if (port) button.addEventListener('click', () => void insert(entry, status, button));
+    else button.disabled = true;
+
+    const params =
+      entry.params.length === 0
+        ? h('p', { text: 'No arguments.' })
+        : h(
+            'dl',
+            { className: 'sp-params' },
+            ...entry.params.flatMap((p) => [
+              h(
+                'dt',
+                {},
+                h('code', { text: p.name }),
+                p.optional ? h('span', { className: 'sp-tag', text: 'optional' }) : null,
+                p.repeating ? h('span', { className: 'sp-tag', text: 'repeats' }) : null,
+              ),
+              h('dd', { text: p.description }),
+            ]),
+          );
+
+    return h(
+      'article',
+      { className: 'sp-fn', attrs: { 'aria-labelledby': headingId, 'data-function': entry.name } },
+      h('h3', { attrs: { id: headingId } }, h('code', { text: entry.call })),
+      h('p', { className: 'sp-summary', text: entry.summary }),
+      entry.details ? h('p', { className: 'sp-details', text: entry.details }) : null,
+      h('h4', { text: 'Arguments' }),
+      params,
+      h('h4', { text: 'Result' }),
+      h('p', { text: entry.result }),
+      entry.examples.length > 0 ? h('h4', { text: entry.examples.length > 1 ? 'Examples' : 'Example' }) : null,
+      ...entry.examples.map(renderExample),
+      entry.errors.length > 0 ? h('h4', { text: 'Errors' }) : null,
+      entry.errors.length > 0 ? h('ul', { className: 'sp-errors' }, ...entry.errors.map((e) => h('li', { text: e }))) : null,
+      entry.cautions.length > 0
+        ? h(
+            'div',
+            { className: 'sp-cautions', attrs: { role: 'note' } },
+            h('h4', { text: 'Caution' }),
+            h('ul', {}, ...entry.cautions.map((c) => h('li', { text: c }))),
+          )
+        : null,
+      h('div', { className: 'sp-actions' }, button, status),
+    );
+  }
+
+  function render(query: string): void {
+    const groups = buildReference(specs, query);
+    const shown = countEntries(groups);
+    const q = query.trim();
+    count.textContent =
+      q === ''
+        ? `${specs.length} functions.`
+        : shown === 0
+          ? `No function matches “${q}”.`
+          : `${shown} of ${specs.length} functions match “${q}”.`;
+    list.replaceChildren(
+      ...groups.map((g) => {
+        const headingId = `${id}-group-${g.group}`;
+        return h(
+          'section',
+          { className: 'sp-group', attrs: { 'aria-labelledby': headingId } },
+          h('h2', { attrs: { id: headingId }, text: g.title }),
+          ...g.entries.map(renderEntry),
+        );
+      }),
+    );
+  }
+
+  const element = h(
+    'div',
+    { className: 'sp-pane' },
+    h(
+      'header',
+      { className: 'sp-header' },
+      h('h1', { text: 'Starpoint phasors' }),
+      h('p', { text: 'Phasor and three-phase functions for your cells, in the PHZ namespace.' }),
+    ),
+    h(
+      'div',
+      { className: 'sp-searchbar', attrs: { role: 'search' } },
+      h('label', { attrs: { for: `${id}-search` }, text: 'Search functions' }),
+      searchInput,
+      count,
+    ),
+    noPortNote,
+    list,
+    h(
+      'footer',
+      { className: 'sp-footer', attrs: { role: 'note' } },
+      h('h2', { text: 'Before you rely on a result' }),
+      h(
+        'p',
+        {
+          text:
+            'Results are only as good as the inputs and the model: fundamental-frequency phasors and linear loads unless harmonics are given. ' +
+            'Conductor sizing, protection and neutral arrangements follow the wiring rules adopted where you work and must be checked by a competent, licensed person. ' +
+            'Work on live systems is for qualified people only.',
+        },
+      ),
+    ),
+  );
+
+  searchInput.addEventListener('input', () => render(searchInput.value));
+  render('');
+  root.replaceChildren(element);
+
+  return {
+    element,
+    search(query: string) {
+      searchInput.value = query;
+      render(query);
+    },
+    unmount() {
+      root.replaceChildren();
+    },
+  };
+}
