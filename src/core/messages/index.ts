@@ -5,3 +5,4 @@
 export { parseMessages } from './parse';
 export { readerMessages } from './readers';
 export { valueMessages } from './values';
+export { threePhaseMessages } from './threephase';

@@ -1,4 +1,9 @@
 import type { FunctionSpec } from '../spec';
+import { BALANCED } from './balanced';
+import { LINEVOLTS } from './linevolts';
+import { STARVOLTS } from './starvolts';
+import { DELTATOSTAR } from './deltatostar';
+import { STARTODELTA } from './startodelta';
 
 /** The functions of group "sets", in reference order. */
-export const setsFunctions: FunctionSpec[] = [];
+export const setsFunctions: FunctionSpec[] = [BALANCED, LINEVOLTS, STARVOLTS, DELTATOSTAR, STARTODELTA];

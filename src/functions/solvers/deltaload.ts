@@ -1,0 +1,58 @@
+import { formatPolar } from '../../core/format';
+import { solveDelta } from '../../core/threephase';
+import { defineFunction, type HostResult } from '../spec';
+import { readBoolean, readDigits } from '../readers';
+import { DIGITS, phasorParam } from '../params';
+import { readImpedanceSet, readLineImpedances, readTriple } from '../sets/_threephase';
+
+const HEADER = ['', 'line current', 'branch current', 'branch voltage', 'branch power'];
+const ROW_LABELS = ['line 1, branch 12', 'line 2, branch 23', 'line 3, branch 31'];
+
+/** Delta load from its line-to-line voltages: line and branch currents, voltages, powers. */
+export const DELTALOAD = defineFunction({
+  name: 'DELTALOAD',
+  group: 'solvers',
+  summary: 'Solves a delta load from its line-to-line voltages: line currents, branch currents, branch voltages and powers.',
+  details:
+    'Without line impedances each branch sees its line voltage: I12 = V12/Z12 and so on, and the line currents follow ' +
+    'from Kirchhoff’s current law at the corners: I1 = I12 − I31, I2 = I23 − I12, I3 = I31 − I23. With line impedances ' +
+    'the network is solved exactly by nodal analysis of the three load corners, fed by the star set with the same line ' +
+    'voltages (a three-wire load draws no zero-sequence current, so the source’s zero sequence cannot matter). A branch ' +
+    'may be "open". Row k: line current I_k, branch current I_k(k+1) (I12, I23, I31), voltage across that branch ' +
+    'impedance, and its complex power V·I*. The line voltages must close: V12 + V23 + V31 = 0.',
+  params: [
+    phasorParam('line_voltages', 'Supply line-to-line voltages V12, V23, V31 (three values)'),
+    { name: 'impedances', type: 'matrix', description: 'Branch impedances Z12, Z23, Z31 (three, or one for all); "open" for a missing branch.' },
+    { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },
+    { name: 'labels', type: 'scalar', optional: true, description: 'TRUE adds a header row and a label column (default FALSE).' },
+    DIGITS,
+  ],
+  result: 'A 3×4 table of polar text (4×5 with labels): row k [I_k, I_k(k+1), V_branch, S_branch].',
+  errors: [
+    'Other than three line voltages, other than one or three impedances, or line voltages that do not sum to zero give #VALUE!.',
+    'A 0 Ω branch with no line impedance, or lines joined through 0 Ω elements, short-circuits the supply: #VALUE!.',
+    'All three branches "open", or a resonant network (no finite solution), give #VALUE!.',
+  ],
+  examples: [
+    {
+      formula: '=PHZ.DELTALOAD({"400∠0";"400∠-120";"400∠120"}, {"40";"80";"40"})',
+      result: [
+        ['17.3205∠-30°', '10∠0°', '400∠0°', '4000∠0°'],
+        ['13.2288∠-160.893°', '5∠-120°', '400∠-120°', '2000∠0°'],
+        ['13.2288∠100.893°', '10∠120°', '400∠120°', '4000∠0°'],
+      ],
+    },
+  ],
+  implementation: (lineVoltages, impedances, line, labels, digits) => {
+    const d = readDigits(digits);
+    const v = readTriple(lineVoltages, 'line_voltages', 'line voltages V12, V23, V31', 'voltage');
+    const loads = readImpedanceSet(impedances, 'impedances', true, 'branch impedance');
+    const lines = readLineImpedances(line);
+    const withLabels = readBoolean(labels, 'labels', false);
+    const s = solveDelta({ lineVoltages: v, loads, lines });
+    const f = (z: Parameters<typeof formatPolar>[0]): string => formatPolar(z, d);
+    const table: HostResult = [0, 1, 2].map((k) => [f(s.lineCurrents[k]), f(s.branchCurrents[k]), f(s.branchVoltages[k]), f(s.branchPowers[k])]);
+    if (!withLabels) return table;
+    return [HEADER.slice(), ...table.map((row, i) => [ROW_LABELS[i], ...row])];
+  },
+});
