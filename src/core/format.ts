@@ -21,6 +21,8 @@ export const DEFAULT_DIGITS = 6;
 export const NOISE = 1e-12;
 
 // exact powers of ten: scaling by them and rounding gives the correctly rounded result
+/** 10^−i, the nearest doubles; only compared against. */
+const NEG10 = [1, 1e-1, 1e-2, 1e-3, 1e-4, 1e-5, 1e-6];
 const POW10 = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];
 
 /** Number to shortest text at `digits` significant figures; never "-0". */
@@ -47,12 +49,17 @@ export function slowDigits(x: number, digits: number): string {
  * test checks it against `slowDigits`.
  */
 function fastDigits(ax: number, digits: number): string | undefined {
-  let e = Math.floor(Math.log10(ax));
-  if (ax >= POW10[e + 1]) e++;
-  else if (ax < POW10[e]) e--;
+  // decimal exponent by comparison (Math.log10 can be one off at powers of ten)
+  let e: number;
+  if (ax >= 1) {
+    e = 0;
+    while (e < 15 && ax >= POW10[e + 1]) e++;
+  } else {
+    e = -1;
+    while (e > -6 && ax < NEG10[-e]) e--;
+  }
   let k = digits - 1 - e;
   if (k < 0) {
-    if (-k > 22) return undefined;
     const scaled = ax / POW10[-k];
     const f = scaled - Math.floor(scaled);
     if (f > 0.4999999 && f < 0.5000001) return undefined;
@@ -62,16 +69,19 @@ function fastDigits(ax: number, digits: number): string | undefined {
   const scaled = ax * POW10[k];
   const f = scaled - Math.floor(scaled);
   if (f > 0.4999999 && f < 0.5000001) return undefined;
-  let n = Math.round(scaled);
+  const n = Math.round(scaled);
   if (n === 0) return '0';
-  while (k > 0 && n % 10 === 0) {
-    n /= 10;
+  let str = String(n);
+  // drop trailing zeros of the fraction
+  let end = str.length;
+  while (k > 0 && str.charCodeAt(end - 1) === 48) {
+    end--;
     k--;
   }
-  const str = String(n);
+  if (end !== str.length) str = str.slice(0, end);
   if (k === 0) return str;
-  if (str.length > k) return str.slice(0, str.length - k) + '.' + str.slice(str.length - k);
-  return '0.' + '0'.repeat(k - str.length) + str;
+  if (end > k) return str.slice(0, end - k) + '.' + str.slice(end - k);
+  return '0.' + '0'.repeat(k - end) + str;
 }
 
 /** Magnitude without hypot's cost where squares cannot overflow or underflow. */

@@ -238,6 +238,7 @@ export function readNumbers(arg: unknown, name: string, options: NumberReadOptio
 
 /** The optional `digits` argument: 1–15 significant figures, default 6. */
 export function readDigits(v: unknown): number {
+  if (v === null || v === undefined) return DEFAULT_DIGITS;
   return readNumber(v, 'digits', { default: DEFAULT_DIGITS, min: 1, max: 15, integer: true });
 }
 

@@ -57,3 +57,22 @@ describe('fast number formatting agrees with toPrecision rounding', () => {
     );
   });
 });
+
+describe('fast number formatting at powers of ten and small magnitudes', () => {
+  it('agrees with toPrecision at and next to every power of ten in its range', () => {
+    for (let p = -6; p < 15; p++) {
+      const x = Number(`1e${p}`);
+      for (const y of [x, x * (1 + Number.EPSILON), x * (1 - Number.EPSILON), x * 0.9999999, x * 1.0000001]) {
+        for (let d = 1; d <= 15; d++) expect(formatNumber(y, d), `${y} at ${d}`).toBe(slowDigits(y, d));
+      }
+    }
+  });
+  it('agrees with toPrecision between 1e-6 and 1', () => {
+    fc.assert(
+      fc.property(fc.double({ min: 1e-6, max: 1, noNaN: true }), fc.integer({ min: 1, max: 15 }), (x, d) => {
+        expect(formatNumber(x, d)).toBe(slowDigits(x, d));
+      }),
+      { numRuns: 20000 },
+    );
+  });
+});
