@@ -5,10 +5,10 @@
  * anything else, and `parsePhasor` then runs the general scanner. A property test checks
  * that both paths agree on every text the fast path accepts.
  */
+import { polarDeg } from './phasor';
+
 let pos = 0;
 
-/** The same factor as the general path (src/core/phasor.ts), so both give identical bits. */
-const DEG = Math.PI / 180;
 
 // exact powers of ten for the correctly rounded fast conversion (Clinger's fast path)
 const POW10 = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22];
@@ -94,11 +94,9 @@ export function fastParse(s: string): boolean {
       spaces(s);
     }
     if (pos !== s.length || neg) return false;
-    const deg = an ? -d : d;
-    const turns = deg / 90;
-    if (turns === Math.trunc(turns)) return false; // exact quadrant values: general path
-    const r = deg * DEG;
-    return ok(a * Math.cos(r), a * Math.sin(r));
+    // the same conversion as the general path, so both give identical bits
+    const z = polarDeg(a, an ? -d : d);
+    return ok(z.re, z.im);
   }
   if ((c | 32) === 106 || (c | 32) === 105) {
     // 4j

@@ -20,12 +20,37 @@ export function polar(magnitude: number, angleRad: number): Phasor {
   return new Complex(magnitude * Math.cos(angleRad), magnitude * Math.sin(angleRad));
 }
 
-/** Phasor from magnitude and angle in degrees (exact at multiples of 90°). */
+/**
+ * cos and sin at every multiple of 15°, as the correctly rounded doubles of the exact
+ * values (√3/2, √2/2, (√6 ± √2)/4 …). Angles such as ±120° and ±30° are everywhere in
+ * three-phase work, and Math.cos(2π/3) is not exactly −0.5.
+ */
+const R3 = Math.sqrt(3) / 2;
+const R2 = Math.SQRT1_2;
+const C15 = (Math.sqrt(6) + Math.sqrt(2)) / 4;
+const S15 = (Math.sqrt(6) - Math.sqrt(2)) / 4;
+/** cos(k·15°) for k = 0 … 23, built from the first quadrant by symmetry. */
+const COS24: readonly number[] = (() => {
+  const q = [1, C15, R3, R2, 0.5, S15];
+  const out: number[] = [];
+  for (let k = 0; k < 24; k++) {
+    const r = k % 6;
+    const quadrant = Math.floor(k / 6);
+    const v = quadrant === 0 ? q[r] : quadrant === 1 ? (r === 0 ? 0 : -q[6 - r]) : quadrant === 2 ? -q[r] : r === 0 ? 0 : q[6 - r];
+    out.push(v);
+  }
+  return out;
+})();
+
+/** Phasor from magnitude and angle in degrees: exact cos/sin at multiples of 15°. */
 export function polarDeg(magnitude: number, angleDeg: number): Phasor {
-  const turns = angleDeg / 90;
-  if (Number.isInteger(turns)) {
-    const q = ((turns % 4) + 4) % 4;
-    return q === 0 ? rect(magnitude, 0) : q === 1 ? rect(0, magnitude) : q === 2 ? rect(-magnitude, 0) : rect(0, -magnitude);
+  const steps = angleDeg / 15;
+  if (steps === (steps | 0)) {
+    let k = steps % 24;
+    if (k < 0) k += 24;
+    // sin(θ) = cos(θ − 90°) = cos((k + 18)·15°)
+    const ks = k >= 6 ? k - 6 : k + 18;
+    return rect(magnitude * COS24[k], magnitude * COS24[ks]);
   }
   return polar(magnitude, angleDeg * DEG);
 }

@@ -37,7 +37,8 @@ export function asMatrix(arg: unknown): unknown[][] {
   return [[arg]];
 }
 
-function where(name: string, m: unknown[][], r: number, c: number): string {
+/** Where a cell sits, for messages: "name", "name, row 2", "name, value 3", "name, row 1 column 2". */
+export function cellName(name: string, m: unknown[][], r: number, c: number): string {
   const cells = m.length * (m[0]?.length ?? 0);
   if (cells <= 1) return name;
   if (m.length === 1) return `${name}, value ${c + 1}`;
@@ -51,11 +52,11 @@ function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: nu
     try {
       return parsePhasor(v, expect ? { expect } : undefined);
     } catch (e) {
-      if (isPhzError(e)) throw new PhzError(M.inCell(where(name, m, r, col), e.message), e.code);
+      if (isPhzError(e)) throw new PhzError(M.inCell(cellName(name, m, r, col), e.message), e.code);
       throw e;
     }
   }
-  return otherCellPhasor(v, where(name, m, r, col));
+  return otherCellPhasor(v, cellName(name, m, r, col));
 }
 
 /** A cell that is not text: a finite number, or an error naming the cell. */
@@ -69,8 +70,8 @@ function otherCellPhasor(v: unknown, at: string): Phasor {
   throw new PhzError(M.unsupported(at));
 }
 
-/** Two columns of numbers (blanks allowed) read as real/imaginary pairs. */
-function isPairBlock(m: unknown[][]): boolean {
+/** Two columns of numbers (blanks allowed, at least one number): read as real/imaginary pairs. */
+export function isPairBlock(m: unknown[][]): boolean {
   if (m.length === 0 || m[0].length !== 2) return false;
   let numbers = 0;
   for (const row of m) {
@@ -119,7 +120,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
       const v = row[c];
       if (isBlank(v)) {
         if (skip) continue;
-        throw new PhzError(M.blankRequired(where(name, m, r, c)));
+        throw new PhzError(M.blankRequired(cellName(name, m, r, c)));
       }
       out.push(cellPhasor(v, name, m, r, c, options.expect));
     }
@@ -223,7 +224,7 @@ export function readNumbers(arg: unknown, name: string, options: NumberReadOptio
   const out: number[] = [];
   for (let r = 0; r < m.length; r++) {
     for (let c = 0; c < m[r].length; c++) {
-      const at = where(name, m, r, c);
+      const at = cellName(name, m, r, c);
       const n = toNumber(m[r][c], at);
       if (n === null) {
         if (options.skipBlanks) continue;

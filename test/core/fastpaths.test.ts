@@ -31,7 +31,7 @@ describe('fast parser agrees bit for bit with the general scanner', () => {
     );
   });
   it('hands every other notation to the general scanner', () => {
-    for (const t of ['230∠-90', '1e3+j2', '4,5+j2', '11 kV∠0', '230e^(j30)', '−5', '1∠0.5rad', 'j2+4']) {
+    for (const t of ['1e3+j2', '4,5+j2', '11 kV∠0', '230e^(j30)', '−5', '1∠0.5rad', 'j2+4']) {
       expect(fastParse(t), t).toBe(false);
     }
   });

@@ -124,3 +124,33 @@ describe('parsePhasor refuses malformed text with what was read, where it stoppe
     expect(err.message).toBe('"230 V" is a voltage but an impedance is expected here; give it in Ω or without a unit');
   });
 });
+
+describe('angles at multiples of 15° are exact', () => {
+  it.each([
+    ['230∠-120', -115, -115 * Math.sqrt(3)],
+    ['230∠120', -115, 115 * Math.sqrt(3)],
+    ['10∠30', 5 * Math.sqrt(3), 5],
+    ['10∠-150', -5 * Math.sqrt(3), -5],
+    ['2∠45', Math.SQRT2, Math.SQRT2],
+    ['1∠-240', -0.5, Math.sqrt(3) / 2],
+    ['1∠390', Math.sqrt(3) / 2, 0.5],
+  ])('%s', (text, re, im) => {
+    const z = parsePhasor(text);
+    // cos 120° = −0.5 exactly (common practice): the real part has no rounding tail
+    expect(z.re).toBeCloseTo(re, 13);
+    expect(z.im).toBeCloseTo(im, 12);
+  });
+  it('230∠-120 has a real part of exactly -115', () => {
+    expect(parsePhasor('230∠-120').re).toBe(-115);
+  });
+  // Math.cos/sin carry their own rounding (about 1e-15 at |angle| ≈ 10 rad), so the
+  // comparison allows a few units in the last place.
+  it('agrees with cos/sin at the 15° steps to the last few bits', () => {
+    for (let k = -48; k <= 48; k++) {
+      const z = parsePhasor(`1∠${k * 15}`);
+      const a = (k * 15 * Math.PI) / 180;
+      expect(Math.abs(z.re - Math.cos(a))).toBeLessThan(4e-15);
+      expect(Math.abs(z.im - Math.sin(a))).toBeLessThan(4e-15);
+    }
+  });
+});

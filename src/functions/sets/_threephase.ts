@@ -11,18 +11,10 @@ import { ZERO, type Phasor } from '../../core/phasor';
 import { formatPolar } from '../../core/format';
 import type { Quantity } from '../../core/parse';
 import { OPEN, isOpen, type Impedance, type Neutral, type Triple } from '../../core/threephase';
-import { asMatrix, isBlank, readPhasor, readPhasors } from '../readers';
-import type { HostCell, HostResult } from '../spec';
+import { asMatrix, cellName, isBlank, isPairBlock, readPhasor, readPhasors } from '../readers';
 
-/** Where a cell sits, for messages: "name", "name, row 2", "name, value 3", "name, row 1 column 2". */
-export function cellName(name: string, m: unknown[][], r: number, c: number): string {
-  const rows = m.length;
-  const cols = m[0]?.length ?? 0;
-  if (rows * cols <= 1) return name;
-  if (rows === 1) return `${name}, value ${c + 1}`;
-  if (cols === 1) return `${name}, row ${r + 1}`;
-  return `${name}, row ${r + 1} column ${c + 1}`;
-}
+export { cellName, isPairBlock };
+import type { HostCell, HostResult } from '../spec';
 
 /** True when an argument was left out of the call (the host passes null or nothing). */
 export function isAbsent(arg: unknown): boolean {
@@ -110,19 +102,6 @@ export function readNeutral(arg: unknown): Neutral {
   if (zs.length !== 1) throw new PhzError(M.neutralWord(`${zs.length} values`));
   const z = zs[0];
   return z.re === 0 && z.im === 0 ? { kind: 'solid' } : { kind: 'impedance', z };
-}
-
-/** Two columns of numbers (blanks allowed, at least one number): real/imaginary pairs. */
-export function isPairBlock(m: unknown[][]): boolean {
-  if (m.length === 0 || m[0].length !== 2) return false;
-  let numbers = 0;
-  for (const row of m) {
-    for (let c = 0; c < 2; c++) {
-      if (typeof row[c] === 'number') numbers++;
-      else if (!isBlank(row[c])) return false;
-    }
-  }
-  return numbers > 0;
 }
 
 /** One argument as a list of entries (a cell, or a real/imaginary row of a pair block). */
