@@ -93,6 +93,11 @@ describe('preview workbook in the browser', () => {
     await page.screenshot({ path: path.join(repoRoot, 'test-artifacts/preview.png') });
   });
 
+  it('fits the window: the page itself never scrolls, the grid and the pane scroll inside', async () => {
+    const [scrollHeight, clientHeight] = await page.evaluate(() => [document.scrollingElement!.scrollHeight, document.scrollingElement!.clientHeight]);
+    expect(scrollHeight).toBe(clientHeight);
+  });
+
   it('shows documented results for typed formulas', async () => {
     const singles = specs
       .flatMap((s) => s.examples)
