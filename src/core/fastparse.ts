@@ -48,17 +48,16 @@ function spaces(s: string): void {
   while (s.charCodeAt(pos) === 32) pos++;
 }
 
-/** Parts of the last successful `fastParse`. */
-export let fastRe = 0;
-export let fastIm = 0;
+/** Parts of the last successful `fastParse` (one shared record: no allocation per call). */
+export const fastResult = { re: 0, im: 0 };
 
 function ok(re: number, im: number): true {
-  fastRe = re;
-  fastIm = im;
+  fastResult.re = re;
+  fastResult.im = im;
   return true;
 }
 
-/** True (parts in fastRe, fastIm) for the common notations, false for anything else. */
+/** True (parts in fastResult) for the common notations, false for anything else. */
 export function fastParse(s: string): boolean {
   pos = 0;
   spaces(s);

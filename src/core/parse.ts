@@ -13,7 +13,7 @@
 import { PhzError } from './errors';
 import { polarDeg, polar, rect, type Phasor } from './phasor';
 import { parseMessages as M } from './messages/parse';
-import * as fast from './fastparse';
+import { fastParse, fastResult } from './fastparse';
 
 /** The physical quantity a unit word names. */
 export type Quantity = 'voltage' | 'current' | 'impedance' | 'admittance' | 'power';
@@ -264,7 +264,7 @@ function commaMode(text: string): boolean {
  * @example parsePhasor('230∠-120') // ≈ -115 - j199.186
  */
 export function parsePhasor(text: string, options?: ParseOptions): Phasor {
-  if (fast.fastParse(text)) return rect(fast.fastRe, fast.fastIm);
+  if (fastParse(text)) return rect(fastResult.re, fastResult.im);
   return parseGeneral(text, options);
 }
 

@@ -1,8 +1,11 @@
 import { PhzError } from '../../core/errors';
 import { valueMessages as M } from '../../core/messages';
+import type { Phasor } from '../../core/phasor';
 import { defineFunction } from '../spec';
 import { phasorColumn, readDigits, readPhasors, zipWith } from '../readers';
 import { DIGITS, phasorParam } from '../params';
+
+const divide = (x: Phasor, y: Phasor): Phasor => x.div(y);
 
 /** Quotient a / b, row by row. */
 export const DIV = defineFunction({
@@ -19,6 +22,6 @@ export const DIV = defineFunction({
     for (let i = 0; i < bs.length; i++) {
       if (bs[i].re === 0 && bs[i].im === 0) throw new PhzError(M.divideByZero(bs.length > 1 ? `b, row ${i + 1}` : 'b'));
     }
-    return phasorColumn(zipWith(readPhasors(a, 'a'), 'a', bs, 'b', (x, y) => x.div(y)), d);
+    return phasorColumn(zipWith(readPhasors(a, 'a'), 'a', bs, 'b', divide), d);
   },
 });
