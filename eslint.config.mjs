@@ -30,7 +30,7 @@ const layer = (message, ...names) => ({
 });
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'build-tsc/**', 'coverage/**', 'test-artifacts/**', 'node_modules/**'] },
+  { ignores: ['dist/**', 'build-bench/**', 'build-tsc/**', 'coverage/**', 'test-artifacts/**', 'node_modules/**'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
