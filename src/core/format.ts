@@ -44,7 +44,7 @@ export function slowDigits(x: number, digits: number): string {
 
 /**
  * Fast rounding for ordinary magnitudes: round |x|·10^k to an integer (10^k exact, so the
- * scaled value is the correctly rounded product) and place the decimal point. Returns
+ * scaled value is the correctly rounded product) and scale back. Returns
  * undefined near a rounding tie, where toPrecision's exact decimal decides. A property
  * test checks it against `slowDigits`.
  */
@@ -58,7 +58,7 @@ function fastDigits(ax: number, digits: number): string | undefined {
     e = -1;
     while (e > -6 && ax < NEG10[-e]) e--;
   }
-  let k = digits - 1 - e;
+  const k = digits - 1 - e;
   if (k < 0) {
     const scaled = ax / POW10[-k];
     const f = scaled - Math.floor(scaled);
@@ -71,17 +71,9 @@ function fastDigits(ax: number, digits: number): string | undefined {
   if (f > 0.4999999 && f < 0.5000001) return undefined;
   const n = Math.round(scaled);
   if (n === 0) return '0';
-  let str = String(n);
-  // drop trailing zeros of the fraction
-  let end = str.length;
-  while (k > 0 && str.charCodeAt(end - 1) === 48) {
-    end--;
-    k--;
-  }
-  if (end !== str.length) str = str.slice(0, end);
-  if (k === 0) return str;
-  if (end > k) return str.slice(0, end - k) + '.' + str.slice(end - k);
-  return '0.' + '0'.repeat(k - end) + str;
+  // n / 10^k is the correctly rounded double of a decimal of at most 15 significant
+  // digits, so its shortest text is that decimal with trailing zeros trimmed
+  return String(n / POW10[k]);
 }
 
 /** Magnitude without hypot's cost where squares cannot overflow or underflow. */

@@ -80,7 +80,10 @@ describe('no input makes a reader throw anything but the project error', () => {
 });
 
 describe('arithmetic agrees with mathjs complex arithmetic', () => {
-  const value = fc.tuple(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.double({ min: -1e6, max: 1e6, noNaN: true }));
+  // subnormal parts (below 1e-300) are no engineering quantity and underflow differently
+  // in each library's division, so they are taken as 0
+  const part = fc.double({ min: -1e6, max: 1e6, noNaN: true }).map((x) => (Math.abs(x) < 1e-300 ? 0 : x));
+  const value = fc.tuple(part, part);
   const nonZero = value.filter(([a, b]) => Math.hypot(a, b) > 1e-6);
   const text = ([a, b]: [number, number]) => formatRect(rect(a, b), 15);
   const read = (r: unknown[][]) => parsePhasor(r[0][0] as string);
