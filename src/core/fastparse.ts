@@ -5,7 +5,7 @@
  * anything else, and `parsePhasor` then runs the general scanner. A property test checks
  * that both paths agree on every text the fast path accepts.
  */
-import { polarDeg } from './phasor';
+import { polarDegParts } from './phasor';
 
 let pos = 0;
 
@@ -94,8 +94,8 @@ export function fastParse(s: string): boolean {
     }
     if (pos !== s.length || neg) return false;
     // the same conversion as the general path, so both give identical bits
-    const z = polarDeg(a, an ? -d : d);
-    return ok(z.re, z.im);
+    polarDegParts(a, an ? -d : d, fastResult);
+    return true;
   }
   if ((c | 32) === 106 || (c | 32) === 105) {
     // 4j

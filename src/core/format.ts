@@ -30,8 +30,8 @@ export function formatNumber(x: number, digits: number = DEFAULT_DIGITS): string
   if (x === 0) return '0';
   const ax = x < 0 ? -x : x;
   if (digits <= 15 && ax >= 1e-6 && ax < 1e15) {
-    const t = fastDigits(ax, digits);
-    if (t !== undefined) return t === '0' ? '0' : x < 0 ? '-' + t : t;
+    const t = fastDigits(ax, digits, x < 0 ? -1 : 1);
+    if (t !== undefined) return t;
   }
   return slowDigits(x, digits);
 }
@@ -48,7 +48,7 @@ export function slowDigits(x: number, digits: number): string {
  * undefined near a rounding tie, where toPrecision's exact decimal decides. A property
  * test checks it against `slowDigits`.
  */
-function fastDigits(ax: number, digits: number): string | undefined {
+function fastDigits(ax: number, digits: number, sign: number): string | undefined {
   // decimal exponent by comparison (Math.log10 can be one off at powers of ten)
   let e: number;
   if (ax >= 1) {
@@ -63,7 +63,8 @@ function fastDigits(ax: number, digits: number): string | undefined {
     const scaled = ax / POW10[-k];
     const f = scaled - Math.floor(scaled);
     if (f > 0.4999999 && f < 0.5000001) return undefined;
-    return String(Math.round(scaled) * POW10[-k]);
+    const v = Math.round(scaled) * POW10[-k];
+    return v === 0 ? '0' : String(sign * v);
   }
   if (k > 22) return undefined;
   const scaled = ax * POW10[k];
@@ -73,7 +74,7 @@ function fastDigits(ax: number, digits: number): string | undefined {
   if (n === 0) return '0';
   // n / 10^k is the correctly rounded double of a decimal of at most 15 significant
   // digits, so its shortest text is that decimal with trailing zeros trimmed
-  return String(n / POW10[k]);
+  return String((sign * n) / POW10[k]);
 }
 
 /** Magnitude without hypot's cost where squares cannot overflow or underflow. */

@@ -42,17 +42,29 @@ const COS24: readonly number[] = (() => {
   return out;
 })();
 
-/** Phasor from magnitude and angle in degrees: exact cos/sin at multiples of 15°. */
-export function polarDeg(magnitude: number, angleDeg: number): Phasor {
+/** Writes the parts of magnitude∠angle° into `out`: exact cos/sin at multiples of 15°. */
+export function polarDegParts(magnitude: number, angleDeg: number, out: { re: number; im: number }): void {
   const steps = angleDeg / 15;
   if (steps === (steps | 0)) {
     let k = steps % 24;
     if (k < 0) k += 24;
-    // sin(θ) = cos(θ − 90°) = cos((k + 18)·15°)
+    // sin(θ) = cos(θ − 90°) = cos((k − 6)·15°)
     const ks = k >= 6 ? k - 6 : k + 18;
-    return rect(magnitude * COS24[k], magnitude * COS24[ks]);
+    out.re = magnitude * COS24[k];
+    out.im = magnitude * COS24[ks];
+    return;
   }
-  return polar(magnitude, angleDeg * DEG);
+  const r = angleDeg * DEG;
+  out.re = magnitude * Math.cos(r);
+  out.im = magnitude * Math.sin(r);
+}
+
+const scratch = { re: 0, im: 0 };
+
+/** Phasor from magnitude and angle in degrees: exact cos/sin at multiples of 15°. */
+export function polarDeg(magnitude: number, angleDeg: number): Phasor {
+  polarDegParts(magnitude, angleDeg, scratch);
+  return rect(scratch.re, scratch.im);
 }
 
 export const ZERO: Phasor = rect(0, 0);

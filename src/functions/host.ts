@@ -8,21 +8,22 @@ import type { FunctionSpec, HostResult } from './spec';
 
 export function guarded(spec: FunctionSpec): (...args: any[]) => HostResult {
   const max = spec.params.length;
-  const hasRepeat = spec.params.some((p) => p.type === 'repeat');
   const impl = spec.implementation;
+  const name = spec.name;
   return (...args: any[]): HostResult => {
-    if (args.length > max && !hasRepeat) throw new PhzError(M.tooManyArgs(spec.name, max, args.length));
+    if (args.length > max) throw new PhzError(M.tooManyArgs(name, max, args.length));
     while (args.length < max) args.push(null);
     let result: HostResult;
     try {
-      result = impl(...args);
+      result = impl.apply(undefined, args);
     } catch (e) {
-      if (isPhzError(e)) throw e;
-      throw new PhzError(M.internal(spec.name, e instanceof Error ? e.message : String(e)));
+      throw isPhzError(e) ? e : new PhzError(M.internal(name, e instanceof Error ? e.message : String(e)));
     }
-    for (const row of result) {
-      for (const cell of row) {
-        if (typeof cell === 'number' && !Number.isFinite(cell)) throw new PhzError(M.nonFiniteResult(spec.name));
+    for (let r = 0; r < result.length; r++) {
+      const row = result[r];
+      for (let c = 0; c < row.length; c++) {
+        const cell = row[c];
+        if (typeof cell === 'number' && !Number.isFinite(cell)) throw new PhzError(M.nonFiniteResult(name));
       }
     }
     return result;

@@ -5,7 +5,8 @@ import { defineFunction } from '../spec';
 import { phasorColumn, readDigits, readPhasors, zipWith } from '../readers';
 import { DIGITS, phasorParam } from '../params';
 
-const divide = (x: Phasor, y: Phasor): Phasor => x.div(y);
+// complex.js reads two numbers faster than a value object (no type checks on the argument)
+const divide = (x: Phasor, y: Phasor): Phasor => x.div(y.re, y.im);
 
 /** Quotient a / b, row by row. */
 export const DIV = defineFunction({
