@@ -85,9 +85,10 @@ function magOf(re: number, im: number): number {
 
 /** Polar text, e.g. `230∠-120°`. */
 export function formatPolar(z: Phasor, digits: number = DEFAULT_DIGITS): string {
-  assertFinite(z);
   let re = z.re;
   let im = z.im;
+  // re − re is 0 for finite numbers and NaN for ±∞ and NaN
+  if (re - re !== 0 || im - im !== 0) throw new PhzError(M.notFinite);
   const m0 = magOf(re, im);
   // a part within 1e-12 of the magnitude is noise
   if (Math.abs(re) <= NOISE * m0) re = 0;
@@ -98,7 +99,7 @@ export function formatPolar(z: Phasor, digits: number = DEFAULT_DIGITS): string 
   let angText = formatNumber(ang, digits);
   // rounding may carry −179.9999… to −180, which is shown as 180
   if (angText === '-180') angText = '180';
-  return formatNumber(mag, digits) + '\u2220' + angText + '\u00b0';
+  return `${formatNumber(mag, digits)}\u2220${angText}\u00b0`;
 }
 
 /** Drops parts that are noise relative to the magnitude. */
