@@ -15,37 +15,43 @@ const POW10 = [1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10, 1e11, 1e1
 
 /** Unsigned decimal at `pos` (digits, optional point, optional exponent); NaN when none. */
 function num(s: string): number {
+  // every read is inside the string: charCodeAt past the end is a slow path in V8
+  const n = s.length;
   const start = pos;
   let i = pos;
   let mant = 0;
-  let nd = 0; // significant digits accumulated
-  let c = s.charCodeAt(i);
-  while (c >= 48 && c <= 57) {
+  let c = 0;
+  while (i < n && (c = s.charCodeAt(i)) >= 48 && c <= 57) {
     mant = mant * 10 + (c - 48);
-    nd++;
-    c = s.charCodeAt(++i);
+    i++;
   }
+  const nd = i - start;
   let frac = 0;
-  if (c === 46) {
-    c = s.charCodeAt(++i);
-    while (c >= 48 && c <= 57) {
+  if (i < n && s.charCodeAt(i) === 46) {
+    i++;
+    const f0 = i;
+    while (i < n && (c = s.charCodeAt(i)) >= 48 && c <= 57) {
       mant = mant * 10 + (c - 48);
-      frac++;
-      c = s.charCodeAt(++i);
+      i++;
     }
+    frac = i - f0;
   }
   if (nd + frac === 0) return NaN;
-  if ((c | 32) === 101) {
-    // an exponent, or the start of e^(…): leave both to the general scanner
-    return NaN;
-  }
+  // an exponent, or the start of e^(…): leave both to the general scanner
+  if (i < n && (s.charCodeAt(i) | 32) === 101) return NaN;
   pos = i;
-  if (nd + frac <= 15 && frac <= 22) return mant / POW10[frac];
+  if (nd + frac <= 15) return mant / POW10[frac];
   return Number(s.slice(start, i));
 }
 
+/** The character code at i, or -1 past the end (never an out-of-bounds read). */
+function at(s: string, i: number): number {
+  return i < s.length ? s.charCodeAt(i) : -1;
+}
+
 function spaces(s: string): void {
-  while (s.charCodeAt(pos) === 32) pos++;
+  const n = s.length;
+  while (pos < n && s.charCodeAt(pos) === 32) pos++;
 }
 
 /** Parts of the last successful `fastParse` (one shared record: no allocation per call). */
@@ -61,7 +67,7 @@ function ok(re: number, im: number): true {
 export function fastParse(s: string): boolean {
   pos = 0;
   spaces(s);
-  let c = s.charCodeAt(pos);
+  let c = at(s, pos);
   let neg = false;
   if (c === 45 || c === 43) {
     neg = c === 45;
@@ -72,13 +78,13 @@ export function fastParse(s: string): boolean {
   if (a !== a) return false; // NaN: not a plain number here
   const first = neg ? -a : a;
   spaces(s);
-  c = s.charCodeAt(pos);
+  c = at(s, pos);
   if (pos === s.length) return ok(first, 0);
   if (c === 0x2220 || c === 60 || c === 64) {
     // polar in degrees
     pos++;
     spaces(s);
-    c = s.charCodeAt(pos);
+    c = at(s, pos);
     let an = false;
     if (c === 45 || c === 43) {
       an = c === 45;
@@ -88,7 +94,7 @@ export function fastParse(s: string): boolean {
     const d = num(s);
     if (d !== d) return false;
     spaces(s);
-    if (s.charCodeAt(pos) === 0xb0) {
+    if (at(s, pos) === 0xb0) {
       pos++;
       spaces(s);
     }
@@ -107,7 +113,7 @@ export function fastParse(s: string): boolean {
   const imNeg = c === 45;
   pos++;
   spaces(s);
-  c = s.charCodeAt(pos);
+  c = at(s, pos);
   let b: number;
   if ((c | 32) === 106 || (c | 32) === 105) {
     pos++;
@@ -118,7 +124,7 @@ export function fastParse(s: string): boolean {
     b = num(s);
     if (b !== b) return false;
     spaces(s);
-    c = s.charCodeAt(pos);
+    c = at(s, pos);
     if ((c | 32) !== 106 && (c | 32) !== 105) return false;
     pos++;
   }
