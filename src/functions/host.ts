@@ -12,7 +12,7 @@ export function guarded(spec: FunctionSpec): (...args: any[]) => HostResult {
   const name = spec.name;
   return (...args: any[]): HostResult => {
     if (args.length > max) throw new PhzError(M.tooManyArgs(name, max, args.length));
-    while (args.length < max) args.push(null);
+    // arguments left out stay undefined, which every reader takes as omitted (spec.ts)
     let result: HostResult;
     try {
       result = impl.apply(undefined, args);

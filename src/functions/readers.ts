@@ -312,8 +312,9 @@ export function column(cells: readonly HostCell[]): HostResult {
 
 /** Phasors as an n×1 column of polar (default) or rectangular text. */
 export function phasorColumn(zs: readonly Phasor[], digits: number, form: 'polar' | 'rect' = 'polar'): HostResult {
-  const fmt = form === 'polar' ? formatPolar : formatRect;
   const out: HostResult = new Array(zs.length);
-  for (let i = 0; i < zs.length; i++) out[i] = [fmt(zs[i], digits)];
+  // direct calls (not through a variable) so the formatter can be inlined
+  if (form === 'polar') for (let i = 0; i < zs.length; i++) out[i] = [formatPolar(zs[i], digits)];
+  else for (let i = 0; i < zs.length; i++) out[i] = [formatRect(zs[i], digits)];
   return out;
 }
