@@ -21,6 +21,9 @@ export interface PhasorReadOptions {
   readonly expect?: Quantity;
 }
 
+/** The default options, shared: no object is made per call on the hot path. */
+const NO_OPTIONS = Object.freeze({});
+
 /** True for a blank cell. Whitespace-only text counts as blank too. */
 export function isBlank(v: unknown): boolean {
   if (v === null || v === undefined || v === '') return true;
@@ -88,7 +91,7 @@ export function isPairBlock(m: unknown[][]): boolean {
  * Reads every phasor of one argument, in row order. With `blanks: 'skip'` blank cells
  * are passed over; otherwise a blank is an error naming the cell.
  */
-export function readPhasors(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor[] {
+export function readPhasors(arg: unknown, name: string, options: PhasorReadOptions = NO_OPTIONS): Phasor[] {
   const m = asMatrix(arg);
   const skip = options.blanks === 'skip';
   // the most common call: one text cell
@@ -129,14 +132,14 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
 }
 
 /** Reads at least one phasor (blanks skipped); an all-blank argument is an error. */
-export function readSomePhasors(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor[] {
+export function readSomePhasors(arg: unknown, name: string, options: PhasorReadOptions = NO_OPTIONS): Phasor[] {
   const out = readPhasors(arg, name, { ...options, blanks: 'skip' });
   if (out.length === 0) throw new PhzError(M.noPhasors(name));
   return out;
 }
 
 /** Reads exactly one phasor. */
-export function readPhasor(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor {
+export function readPhasor(arg: unknown, name: string, options: PhasorReadOptions = NO_OPTIONS): Phasor {
   const out = readPhasors(arg, name, options);
   if (out.length !== 1) throw new PhzError(out.length === 0 ? M.blankRequired(name) : M.notOne(name, out.length));
   return out[0];
@@ -147,7 +150,7 @@ export function readPhasor(arg: unknown, name: string, options: PhasorReadOption
  * list of phasors, blanks skipped. `name` is the parameter's name, e.g. `z`: values are
  * named z1, z2, … in messages.
  */
-export function readRepeatedPhasors(arg: unknown, name: string, options: PhasorReadOptions = {}): Phasor[] {
+export function readRepeatedPhasors(arg: unknown, name: string, options: PhasorReadOptions = NO_OPTIONS): Phasor[] {
   const groups = Array.isArray(arg) ? (arg as unknown[]) : [arg];
   // a caller that passes one matrix instead of a list of matrices
   const list = groups.length > 0 && Array.isArray(groups[0]) && !Array.isArray((groups[0] as unknown[])[0]) ? [groups] : groups;
@@ -209,7 +212,7 @@ function checkNumber(n: number, at: string, o: NumberReadOptions): number {
 }
 
 /** Reads one number. */
-export function readNumber(v: unknown, name: string, options: NumberReadOptions = {}): number {
+export function readNumber(v: unknown, name: string, options: NumberReadOptions = NO_OPTIONS): number {
   const n = toNumber(v, name);
   if (n === null) {
     if (options.default !== undefined) return options.default;
@@ -219,7 +222,7 @@ export function readNumber(v: unknown, name: string, options: NumberReadOptions 
 }
 
 /** Reads every number of a range, in row order (blanks are errors unless `skipBlanks`). */
-export function readNumbers(arg: unknown, name: string, options: NumberReadOptions & { skipBlanks?: boolean } = {}): number[] {
+export function readNumbers(arg: unknown, name: string, options: NumberReadOptions & { skipBlanks?: boolean } = NO_OPTIONS): number[] {
   const m = asMatrix(arg);
   const out: number[] = [];
   for (let r = 0; r < m.length; r++) {
