@@ -15,7 +15,7 @@ export function guarded(spec: FunctionSpec): (...args: any[]) => HostResult {
     // arguments left out stay undefined, which every reader takes as omitted (spec.ts)
     let result: HostResult;
     try {
-      result = impl.apply(undefined, args);
+      result = impl(...args);
     } catch (e) {
       throw isPhzError(e) ? e : new PhzError(M.internal(name, e instanceof Error ? e.message : String(e)));
     }
