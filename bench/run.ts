@@ -4,7 +4,7 @@
  * SUM over a 100,000-cell column of text phasors ≤ 30 ms; STARLOAD ≤ 5 µs per call.
  *
  * Every case runs in a fresh node process (so one library's JIT state cannot help or
- * hurt another's), three times; the best batch of the best process is reported.
+ * hurt another's), five times; the best batch of the best process is reported.
  */
 import Complex from 'complex.js';
 import * as math from 'mathjs';
@@ -64,7 +64,7 @@ const CASES: Record<string, () => Promise<number> | number> = {
 
 function measure(name: string): number {
   let best = Infinity;
-  for (let k = 0; k < 3; k++) {
+  for (let k = 0; k < 5; k++) {
     const out = execFileSync(process.execPath, [__filename, name], { encoding: 'utf8' });
     best = Math.min(best, Number(out.trim()));
   }
@@ -82,7 +82,7 @@ async function main(): Promise<void> {
     if (sink === 0.5) console.log('');
     return;
   }
-  console.log(`Starpoint benchmark — node ${process.version}; each case in a fresh process, best of 3\n`);
+  console.log(`Starpoint benchmark — node ${process.version}; each case in a fresh process, best of 5\n`);
   const divPolar = measure('divPolar');
   const divRect = measure('divRect');
   const cjs = measure('complexjs');
