@@ -9,7 +9,7 @@
  *   zero phasor prints as `0`.
  */
 import { PhzError } from './errors';
-import type { Phasor } from './phasor';
+import { NOISE_REL, magnitudeOf, type Phasor } from './phasor';
 import { valueMessages as M } from './messages/values';
 
 function assertFinite(z: Phasor): void {
@@ -17,8 +17,6 @@ function assertFinite(z: Phasor): void {
 }
 
 export const DEFAULT_DIGITS = 6;
-/** Parts smaller than this fraction of the magnitude are rounding noise. */
-export const NOISE = 1e-12;
 
 // exact powers of ten: scaling by them and rounding gives the correctly rounded result
 /** 10^−i, the nearest doubles; only compared against. */
@@ -77,22 +75,16 @@ function fastDigits(ax: number, digits: number, sign: number): string | undefine
   return String((sign * n) / POW10[k]);
 }
 
-/** Magnitude without hypot's cost where squares cannot overflow or underflow. */
-function magOf(re: number, im: number): number {
-  const m = Math.sqrt(re * re + im * im);
-  return m > 1e-150 && m < 1e150 ? m : Math.hypot(re, im);
-}
-
 /** Polar text, e.g. `230∠-120°`. */
 export function formatPolar(z: Phasor, digits: number = DEFAULT_DIGITS): string {
   let re = z.re;
   let im = z.im;
   // re − re is 0 for finite numbers and NaN for ±∞ and NaN
   if (re - re !== 0 || im - im !== 0) throw new PhzError(M.notFinite);
-  const m0 = magOf(re, im);
+  const m0 = magnitudeOf(re, im);
   // a part within 1e-12 of the magnitude is noise
-  if (Math.abs(re) <= NOISE * m0) re = 0;
-  if (Math.abs(im) <= NOISE * m0) im = 0;
+  if (Math.abs(re) <= NOISE_REL * m0) re = 0;
+  if (Math.abs(im) <= NOISE_REL * m0) im = 0;
   if (re === 0 && im === 0) return '0';
   const mag = re === 0 ? Math.abs(im) : im === 0 ? Math.abs(re) : m0;
   const ang = (Math.atan2(im, re) * 180) / Math.PI;
@@ -106,9 +98,9 @@ export function formatPolar(z: Phasor, digits: number = DEFAULT_DIGITS): string 
 function clean(z: Phasor): [number, number] {
   let re = z.re;
   let im = z.im;
-  const m = magOf(re, im);
-  if (Math.abs(re) <= NOISE * m) re = 0;
-  if (Math.abs(im) <= NOISE * m) im = 0;
+  const m = magnitudeOf(re, im);
+  if (Math.abs(re) <= NOISE_REL * m) re = 0;
+  if (Math.abs(im) <= NOISE_REL * m) im = 0;
   return [re, im];
 }
 

@@ -81,9 +81,22 @@ export function radToDeg(rad: number): number {
   return rad / DEG;
 }
 
+/**
+ * The one rounding-noise rule of the project: a quantity below NOISE_REL of the size of
+ * what produced it (the operands of a sum, the magnitude of a phasor, the scale of a
+ * network) is rounding noise in binary and is taken as exactly 0 (common practice).
+ */
+export const NOISE_REL = 1e-12;
+
+/** |re + j·im|: a square root where the squares cannot overflow or underflow, else hypot. */
+export function magnitudeOf(re: number, im: number): number {
+  const m = Math.sqrt(re * re + im * im);
+  return m > 1e-150 && m < 1e150 ? m : Math.hypot(re, im);
+}
+
 /** Magnitude |z|. */
 export function magnitude(z: Phasor): number {
-  return Math.hypot(z.re, z.im);
+  return magnitudeOf(z.re, z.im);
 }
 
 /** Angle in degrees in (−180, 180]; 0 for the zero phasor. */
@@ -116,7 +129,7 @@ export function finite(z: Phasor, what: string): Phasor {
 }
 
 /**
- * Phasor sum with cancellation snapped to zero: when the sum is below 1e-12 of the sum of
+ * Phasor sum with cancellation snapped to zero: when the sum is below NOISE_REL of the sum of
  * the magnitudes added, it is rounding noise (a balanced set adds to exactly 0, but
  * cos/sin of 120° are not exact in binary) and the result is 0.
  */
@@ -134,7 +147,7 @@ export function sumOf(zs: readonly Phasor[]): Phasor {
   return snapToZero(rect(re, im), scale);
 }
 
-/** `z`, or exactly 0 when |z| is within 1e-12 of `scale` (the size of what produced it). */
+/** `z`, or exactly 0 when |z| is within NOISE_REL of `scale` (the size of what produced it). */
 export function snapToZero(z: Phasor, scale: number): Phasor {
-  return Math.hypot(z.re, z.im) <= 1e-12 * scale ? ZERO : z;
+  return magnitudeOf(z.re, z.im) <= NOISE_REL * scale ? ZERO : z;
 }

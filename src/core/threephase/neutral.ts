@@ -3,7 +3,7 @@
  * sizing rules of IEC 60364-5-52 Annex E and NFPA 70 Art. 220.61.
  */
 import { PhzError } from '../errors';
-import { angleRad, magnitude, polar, type Phasor } from '../phasor';
+import { NOISE_REL, angleRad, magnitude, polar, type Phasor } from '../phasor';
 import { threePhaseMessages as M } from '../messages/threephase';
 import type { Triple } from './types';
 
@@ -43,7 +43,7 @@ export interface NeutralRmsResult {
 export function neutralRms(currents: Triple<Phasor>, harmonics: readonly Harmonic[]): NeutralRmsResult {
   const fundamental = currents[0].add(currents[1]).add(currents[2]);
   const scale = magnitude(currents[0]) + magnitude(currents[1]) + magnitude(currents[2]);
-  const snap = (x: number): number => (x <= 1e-12 * scale ? 0 : x);
+  const snap = (x: number): number => (x <= NOISE_REL * scale ? 0 : x);
   const f = snap(magnitude(fundamental));
   let sumSq = f * f;
   const byOrder: Array<readonly [number, number]> = [];

@@ -13,7 +13,7 @@
  * branch has Y = 0.
  */
 import { PhzError } from '../errors';
-import { ZERO, rect, type Phasor } from '../phasor';
+import { ZERO, magnitudeOf, rect, type Phasor } from '../phasor';
 import { threePhaseMessages as M } from '../messages/threephase';
 import { ZERO_REL, isOpen, type Impedance, type Triple } from './types';
 
@@ -53,11 +53,6 @@ export interface StarSolution {
 
 const PHASE_WHAT = (k: number, hasLine: boolean): string => (hasLine ? `load + line impedance of phase ${k}` : `the load impedance of phase ${k}`);
 
-/** |re + j·im| without Math.hypot's overflow care (slow on the hot path; magnitudes here are far below 1e150). */
-function abs(re: number, im: number): number {
-  return Math.sqrt(re * re + im * im);
-}
-
 /** Branch kinds, kept as numbers so the solve runs on plain doubles (it is on the hot path). */
 const OPEN_B = 0;
 const SHORT_B = 1;
@@ -78,7 +73,7 @@ export function solveStar(input: StarInput): StarSolution {
     const zr = z.re + lines[k].re;
     const zi = z.im + lines[k].im;
     const m2 = zr * zr + zi * zi;
-    const scale = abs(z.re, z.im) + abs(lines[k].re, lines[k].im);
+    const scale = magnitudeOf(z.re, z.im) + magnitudeOf(lines[k].re, lines[k].im);
     if (m2 === 0 || Math.sqrt(m2) <= ZERO_REL * scale) {
       kind[k] = SHORT_B;
     } else {
@@ -129,22 +124,22 @@ export function solveStar(input: StarInput): StarSolution {
     let ni = 0;
     let dr = ynr;
     let di = yni;
-    let scale = abs(ynr, yni);
+    let scale = magnitudeOf(ynr, yni);
     for (let k = 0; k < 3; k++) {
       if (kind[k] !== ADMIT_B) continue;
       nr += er[k] * yr[k] - ei[k] * yi[k];
       ni += er[k] * yi[k] + ei[k] * yr[k];
       dr += yr[k];
       di += yi[k];
-      scale += abs(yr[k], yi[k]);
+      scale += magnitudeOf(yr[k], yi[k]);
     }
     const d2 = dr * dr + di * di;
     if (d2 === 0 || Math.sqrt(d2) <= ZERO_REL * scale) throw new PhzError(M.resonance);
     vr = (nr * dr + ni * di) / d2;
     vi = (ni * dr - nr * di) / d2;
     // a balanced set leaves only rounding noise of a³ = 1 in binary
-    const eScale = Math.max(abs(er[0], ei[0]), abs(er[1], ei[1]), abs(er[2], ei[2]));
-    if (abs(vr, vi) <= ZERO_REL * eScale) {
+    const eScale = Math.max(magnitudeOf(er[0], ei[0]), magnitudeOf(er[1], ei[1]), magnitudeOf(er[2], ei[2]));
+    if (magnitudeOf(vr, vi) <= ZERO_REL * eScale) {
       vr = 0;
       vi = 0;
     }
@@ -152,14 +147,14 @@ export function solveStar(input: StarInput): StarSolution {
 
   // line currents I_k = (E_k − V)·Y_k; a difference below 1e-12 of the EMFs is rounding noise
   // (e.g. equal EMFs on a floating star point), so that branch carries exactly nothing
-  const eMax = Math.max(abs(er[0], ei[0]), abs(er[1], ei[1]), abs(er[2], ei[2]));
+  const eMax = Math.max(magnitudeOf(er[0], ei[0]), magnitudeOf(er[1], ei[1]), magnitudeOf(er[2], ei[2]));
   const ir = [0, 0, 0];
   const ii = [0, 0, 0];
   for (let k = 0; k < 3; k++) {
     if (kind[k] !== ADMIT_B) continue;
     const ur = er[k] - vr;
     const ui = ei[k] - vi;
-    if (abs(ur, ui) <= ZERO_REL * eMax) continue;
+    if (magnitudeOf(ur, ui) <= ZERO_REL * eMax) continue;
     ir[k] = ur * yr[k] - ui * yi[k];
     ii[k] = ur * yi[k] + ui * yr[k];
   }
@@ -181,8 +176,8 @@ export function solveStar(input: StarInput): StarSolution {
 
   let inr = ir[0] + ir[1] + ir[2];
   let ini = ii[0] + ii[1] + ii[2];
-  const iScale = abs(ir[0], ii[0]) + abs(ir[1], ii[1]) + abs(ir[2], ii[2]);
-  if (abs(inr, ini) <= ZERO_REL * iScale) {
+  const iScale = magnitudeOf(ir[0], ii[0]) + magnitudeOf(ir[1], ii[1]) + magnitudeOf(ir[2], ii[2]);
+  if (magnitudeOf(inr, ini) <= ZERO_REL * iScale) {
     inr = 0;
     ini = 0;
   }

@@ -2,7 +2,7 @@
  * Shared types of the three-phase core. Phases are numbered 1, 2, 3 and stored in that
  * order; delta branches are stored as 12, 23, 31.
  */
-import type { Phasor } from '../phasor';
+import { NOISE_REL, magnitudeOf, type Phasor } from '../phasor';
 
 /** Three values, one per phase (1, 2, 3) or per delta branch (12, 23, 31). */
 export type Triple<T> = readonly [T, T, T];
@@ -18,11 +18,11 @@ export function isOpen(z: Impedance): z is Open {
   return z === OPEN;
 }
 
-/** The relative size below which a sum of impedances counts as exactly zero. */
-export const ZERO_REL = 1e-12;
+/** The relative size below which a sum of impedances counts as exactly zero: the project's one noise rule. */
+export const ZERO_REL = NOISE_REL;
 
 /** True when z is 0, or is within ZERO_REL of `scale` (the size of what produced it). */
 export function isZeroish(z: Phasor, scale = 0): boolean {
-  const m = Math.hypot(z.re, z.im);
+  const m = magnitudeOf(z.re, z.im);
   return m === 0 || m <= ZERO_REL * scale;
 }

@@ -1,6 +1,6 @@
 import { PhzError } from '../../core/errors';
 import { valueMessages as M } from '../../core/messages';
-import { ZERO, magnitude } from '../../core/phasor';
+import { NOISE_REL, ZERO, magnitude } from '../../core/phasor';
 import { defineFunction } from '../spec';
 import { phasorColumn, readRepeatedPhasors } from '../readers';
 import { repeatParam } from '../params';
@@ -26,7 +26,7 @@ export const PARALLEL = defineFunction({
     const y = zs.reduce((acc, p) => acc.add(p.inverse()), ZERO);
     // relative test: admittances that cancel to rounding noise are a resonance, not a huge impedance
     const scale = zs.reduce((m, p) => Math.max(m, 1 / magnitude(p)), 0);
-    if (magnitude(y) <= 1e-12 * scale) throw new PhzError(M.resonance);
+    if (magnitude(y) <= NOISE_REL * scale) throw new PhzError(M.resonance);
     return phasorColumn([y.inverse()], 6);
   },
 });

@@ -11,7 +11,7 @@ import { ZERO, type Phasor } from '../../core/phasor';
 import { formatPolar } from '../../core/format';
 import type { Quantity } from '../../core/parse';
 import { OPEN, isOpen, type Impedance, type Neutral, type Triple } from '../../core/threephase';
-import { asMatrix, cellName, isBlank, isPairBlock, readPhasor, readPhasors } from '../readers';
+import { asMatrix, cellName, isBlank, isPairBlock, phasorColumn, readPhasor, readPhasors } from '../readers';
 
 export { cellName, isPairBlock };
 import type { HostCell, HostResult } from '../spec';
@@ -190,7 +190,7 @@ export function orZero(t: Triple<Phasor | null>): Triple<Phasor> {
 
 /** A three-phase set as a 3×1 column of polar text. */
 export function setColumn(zs: Triple<Phasor>, digits: number): HostResult {
-  return [[formatPolar(zs[0], digits)], [formatPolar(zs[1], digits)], [formatPolar(zs[2], digits)]];
+  return phasorColumn(zs, digits);
 }
 
 /** An impedance as a cell: polar text, or "open". */
