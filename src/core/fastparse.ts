@@ -1,6 +1,6 @@
 /**
  * Fast path of the parser for the two most common notations, plain rectangular
- * (`-115-j199.186`, `8+j6`, `4+2j`, `7`) and plain polar in degrees (`230∠-120`, `230∠-120°`,
+ * (`-115-j199.186`, `8+j6`, `7+5j`, `7`) and plain polar in degrees (`230∠-120`, `230∠-120°`,
  * `230<-120`, `230@-120`), ASCII digits, no unit, no decimal comma. It returns false for
  * anything else, and `parsePhasor` then runs the general scanner. A property test checks
  * that both paths agree on every text the fast path accepts.

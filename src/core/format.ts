@@ -1,5 +1,5 @@
 /**
- * The one phasor formatter: polar `53.6656∠-26.5651°` and rectangular `47.5498-j34.0565`.
+ * The one phasor formatter: polar `26.2365∠-20.709°` and rectangular `24.5413-j9.2778`.
  *
  * - `digits` significant figures (1–15, default 6), trailing zeros trimmed.
  * - Polar: magnitude and angle each get `digits` significant figures; angle in (−180, 180].
@@ -129,7 +129,7 @@ function atDecimals(x: number, decimals: number): string {
   return String(r);
 }
 
-/** Rectangular text, e.g. `47.5498-j34.0565`, `-j3`, `4`. */
+/** Rectangular text, e.g. `24.5413-j9.2778`, `-j3`, `4`. */
 export function formatRect(z: Phasor, digits: number = DEFAULT_DIGITS): string {
   assertFinite(z);
   const [re, im] = clean(z);

@@ -2,11 +2,11 @@
  * The one phasor parser. Every text a cell can hold goes through `parsePhasor`.
  *
  * Notations (spaces anywhere; letters j, i, e, rad, deg and unit words in any case):
- * - rectangular: `4+j2`, `4+2j`, `4+2i`, `4 - j 2`, `-j3`, `j`, `2.5e-3+j1e-2`, `−` (U+2212) as minus;
+ * - rectangular: `7+j5`, `7+5j`, `7+5i`, `7 - j 5`, `-j3`, `j`, `2.5e-3+j1e-2`, `−` (U+2212) as minus;
  * - polar, degrees by default: `230∠-120`, `230∠-120°`, `230<-120`, `230@-120`, `1∠0.5rad`;
  * - exponential: `230e^(j30)`, `230e^(-j30°)`;
- * - a decimal comma where no other reading exists: `4,5+j2,25`;
- * - a unit with SI prefix after the number or at the end: `11 kV∠0`, `4+j2 Ω`, `250 mΩ`.
+ * - a decimal comma where no other reading exists: `7,5+j2,25`;
+ * - a unit with SI prefix after the number or at the end: `11 kV∠0`, `7+j5 Ω`, `250 mΩ`.
  *   The prefix scales the value; the unit word is checked (and, when the caller says
  *   what quantity it expects, matched), never converted.
  */

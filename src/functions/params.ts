@@ -13,7 +13,7 @@ export function phasorParam(name: string, what: string): ParamSpec {
   return {
     name,
     type: 'matrix',
-    description: `${what}: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).`,
+    description: `${what}: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).`,
   };
 }
 

@@ -169,7 +169,7 @@ export class PhzEngine {
  *
  * @param formula A formula starting with `=`, e.g. `=PHZ.DIV("230∠-120","10∠30")`.
  * @param sheetData Optional rows of raw contents put at A1 of the same sheet, so the
- *   formula can refer to them (`=PHZ.SUM(A1:A3)`).
+ *   formula can refer to them (`=PHZ.ADD(A1:A3)`).
  * @returns The cells the formula fills, as rows: values, or `{ error, message }`.
  * @example evaluateFormula('=PHZ.MAG("3+j4")') // [[5]]
  */

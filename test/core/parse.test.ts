@@ -10,13 +10,13 @@ const pd = (m: number, deg: number) => r(m * Math.cos((deg * Math.PI) / 180), m 
 describe('parsePhasor reads every notation', () => {
   it.each([
     // rectangular
-    ['4+j2', r(4, 2)],
-    ['4+2j', r(4, 2)],
-    ['4+2i', r(4, 2)],
-    ['4+J2', r(4, 2)],
-    ['4+2I', r(4, 2)],
-    ['4 - j 2', r(4, -2)],
-    ['  4  -  2 j  ', r(4, -2)],
+    ['7+j5', r(7, 5)],
+    ['7+5j', r(7, 5)],
+    ['7+5i', r(7, 5)],
+    ['7+J5', r(7, 5)],
+    ['7+5I', r(7, 5)],
+    ['7 - j 5', r(7, -5)],
+    ['  7  -  5 j  ', r(7, -5)],
     ['-j3', r(0, -3)],
     ['j', r(0, 1)],
     ['-j', r(0, -1)],
@@ -53,16 +53,16 @@ describe('parsePhasor reads every notation', () => {
     ['e^(j90)', r(0, 1)],
     ['1.5e2e^(j90)', r(0, 150)],
     // decimal comma
-    ['4,5+j2,25', r(4.5, 2.25)],
+    ['7,5+j2,25', r(7.5, 2.25)],
     ['230,5∠-120', pd(230.5, -120)],
     ['0,25', r(0.25, 0)],
     // units with SI prefix: the prefix scales, the word is checked
     ['11 kV∠0', r(11000, 0)],
     ['11kV∠30', pd(11000, 30)],
-    ['4+j2 Ω', r(4, 2)],
-    ['4+j2 \u2126', r(4, 2)],
-    ['4+j2 ohm', r(4, 2)],
-    ['4+j2 Ohms', r(4, 2)],
+    ['7+j5 Ω', r(7, 5)],
+    ['7+j5 \u2126', r(7, 5)],
+    ['7+j5 ohm', r(7, 5)],
+    ['7+j5 Ohms', r(7, 5)],
     ['250 mΩ', r(0.25, 0)],
     ['250mohm', r(0.25, 0)],
     ['230 V', r(230, 0)],
@@ -92,7 +92,7 @@ describe('parsePhasor refuses malformed text with what was read, where it stoppe
   it.each([
     ['', /empty/],
     ['   ', /empty/],
-    ['4+k2', /stopped at "k2" \(character 3\)/],
+    ['7+k5', /stopped at "k5" \(character 3\)/],
     ['abc', /stopped at "abc" \(character 1\)/],
     ['230∠', /stopped at the end.*angle/],
     ['230∠abc', /angle/],
@@ -114,12 +114,12 @@ describe('parsePhasor refuses malformed text with what was read, where it stoppe
     const err = expectPhzError(() => parsePhasor(text));
     expect(err.message).toMatch(pattern);
     // every message shows a valid form to copy
-    if (!/separator|one decimal|too large/.test(err.message)) expect(err.message).toMatch(/4\+j2, 230∠-120/);
+    if (!/separator|one decimal|too large/.test(err.message)) expect(err.message).toMatch(/7\+j5, 230∠-120/);
   });
 
   it('checks the unit word against the quantity the argument expects', () => {
-    expect(parsePhasor('4+j2 Ω', { expect: 'impedance' }).re).toBe(4);
-    expect(parsePhasor('4+j2', { expect: 'impedance' }).re).toBe(4);
+    expect(parsePhasor('7+j5 Ω', { expect: 'impedance' }).re).toBe(7);
+    expect(parsePhasor('7+j5', { expect: 'impedance' }).re).toBe(7);
     const err = expectPhzError(() => parsePhasor('230 V', { expect: 'impedance' }));
     expect(err.message).toBe('"230 V" is a voltage but an impedance is expected here; give it in Ω or without a unit');
   });

@@ -17,11 +17,11 @@ import { expectPhasorClose, expectPhzError } from '../helpers';
 
 describe('readPhasors: shapes of DESIGN §3', () => {
   it('reads one text cell', () => {
-    const [z] = readPhasors([['4+j2']], 'z');
-    expectPhasorClose(z, { re: 4, im: 2 });
+    const [z] = readPhasors([['7+j5']], 'z');
+    expectPhasorClose(z, { re: 7, im: 5 });
   });
   it('reads a scalar as one cell', () => {
-    expect(readPhasors('4+j2', 'z')).toHaveLength(1);
+    expect(readPhasors('7+j5', 'z')).toHaveLength(1);
     expect(readPhasors(5, 'z')[0].re).toBe(5);
   });
   it('reads a number as a real phasor', () => {
@@ -50,7 +50,7 @@ describe('readPhasors: shapes of DESIGN §3', () => {
   });
   it('names the blank cell when a phasor is required', () => {
     expect(expectPhzError(() => readPhasors([['1'], [null]], 'impedances')).message).toBe(
-      'impedances, row 2 is blank: a phasor is required here; enter a value such as 230∠0 or 4+j2',
+      'impedances, row 2 is blank: a phasor is required here; enter a value such as 230∠0 or 7+j5',
     );
     expect(expectPhzError(() => readPhasors([['1', 'x', '2']], 'z')).message).toMatch(/^z, value 2: cannot read "x"/);
     expect(expectPhzError(() => readPhasors([['1', '2', '3'], ['4', '', '6']], 'z')).message).toMatch(/^z, row 2 column 2 is blank/);

@@ -51,8 +51,8 @@ describe('adapter: what implementations receive', () => {
   });
 
   it('wraps a single value given for a matrix parameter as [[v]]', () => {
-    evaluateFormula('=PHZ.EACH("4+j2", 3)', [], registry);
-    expect(last()).toEqual([[['4+j2']], 3]);
+    evaluateFormula('=PHZ.EACH("7+j5", 3)', [], registry);
+    expect(last()).toEqual([[['7+j5']], 3]);
   });
 
   it('passes an empty cell for a matrix parameter as [[null]]', () => {

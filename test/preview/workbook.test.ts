@@ -102,7 +102,7 @@ describe('cell text', () => {
 
   it.each([
     ['230∠-120', true],
-    ['4+j2', true],
+    ['7+j5', true],
     ['Load impedance', false],
     ['L1', false],
   ])('treats %s as a phasor input: %s', (text, yes) => {

@@ -1,7 +1,7 @@
 /** Messages of the phasor parser (part of the one message catalogue, src/core/messages). */
 import type { Quantity } from '../parse';
 
-const FORMS = 'write it like 4+j2, 230∠-120, 230∠-120°, 1∠0.5rad or 230e^(j30)';
+const FORMS = 'write it like 7+j5, 230∠-120, 230∠-120°, 1∠0.5rad or 230e^(j30)';
 
 const UNIT_OF: Record<Quantity, string> = {
   voltage: 'V',
@@ -37,7 +37,7 @@ export const parseMessages = {
     return `cannot read ${quote(text)} as a phasor: stopped ${where}, ${why}; ${FORMS}`;
   },
   commaAndPoint(text: string): string {
-    return `cannot read ${quote(text)}: it mixes a decimal comma and a decimal point; use one decimal separator, e.g. 4.5+j2.25 or 4,5+j2,25`;
+    return `cannot read ${quote(text)}: it mixes a decimal comma and a decimal point; use one decimal separator, e.g. 7.5+j2.25 or 7,5+j2,25`;
   },
   ambiguousComma(text: string): string {
     return `cannot read ${quote(text)}: the comma could be a thousands separator or a decimal comma; write 1000 or 1.000 (no thousands separators)`;

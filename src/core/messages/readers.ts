@@ -2,7 +2,7 @@
 
 export const readerMessages = {
   blankRequired(where: string): string {
-    return `${where} is blank: a phasor is required here; enter a value such as 230∠0 or 4+j2`;
+    return `${where} is blank: a phasor is required here; enter a value such as 230∠0 or 7+j5`;
   },
   noPhasors(name: string): string {
     return `${name} holds no phasor (every cell is blank): give at least one value such as 230∠0`;
@@ -11,13 +11,13 @@ export const readerMessages = {
     return `${name} must be one phasor but holds ${n}: give a single cell or value`;
   },
   boolean(where: string): string {
-    return `${where} is TRUE/FALSE, not a phasor: give a number or text such as 4+j2`;
+    return `${where} is TRUE/FALSE, not a phasor: give a number or text such as 7+j5`;
   },
   errorValue(where: string): string {
     return `${where} holds an error value: fix the cell it comes from first`;
   },
   unsupported(where: string): string {
-    return `${where} holds a value that is neither a number nor text: give a number or text such as 4+j2`;
+    return `${where} holds a value that is neither a number nor text: give a number or text such as 7+j5`;
   },
   notFinite(where: string): string {
     return `${where} is not a finite number: give a finite value`;

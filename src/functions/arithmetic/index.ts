@@ -1,5 +1,5 @@
 import type { FunctionSpec } from '../spec';
-import { SUM } from './sum';
+import { ADD } from './add';
 import { SUB } from './sub';
 import { MUL } from './mul';
 import { DIV } from './div';
@@ -9,4 +9,4 @@ import { PARALLEL } from './parallel';
 import { ROTATE } from './rotate';
 
 /** The functions of group "arithmetic", in reference order. */
-export const arithmeticFunctions: FunctionSpec[] = [SUM, SUB, MUL, DIV, CONJ, INV, PARALLEL, ROTATE];
+export const arithmeticFunctions: FunctionSpec[] = [ADD, SUB, MUL, DIV, CONJ, INV, PARALLEL, ROTATE];

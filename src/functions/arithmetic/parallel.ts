@@ -13,7 +13,7 @@ export const PARALLEL = defineFunction({
   details:
     'A 0 Ω branch shorts the group, so the result is 0. Branches whose admittances cancel (a resonant L–C pair) ' +
     'have no finite parallel impedance and give #VALUE!. No digits argument (the repeating argument must come last).',
-  params: [repeatParam('z', 'Branch impedances')],
+  params: [repeatParam('z1', 'Branch impedances')],
   result: 'One impedance, polar text.',
   errors: ['Resonant branches (admittances sum to 0), text that is not a phasor, or all blanks give #VALUE!.'],
   examples: [

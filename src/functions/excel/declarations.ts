@@ -8,24 +8,24 @@ import { invoke } from './register';
 
 /**
  * Shows phasors in polar form, magnitude∠angle° (angle in degrees, −180 to 180).
- * @customfunction POLAR
- * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @customfunction TOPOLAR
+ * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
- * @returns {any[][]} Polar text, e.g. 53.6656∠-26.5651°; one row per phasor.
+ * @returns {any[][]} Polar text, e.g. 26.2365∠-20.709°; one row per phasor.
  */
-export function POLAR(z: any[][], digits?: any): any[][] {
-  return invoke('POLAR', [z, digits]);
+export function TOPOLAR(z: any[][], digits?: any): any[][] {
+  return invoke('TOPOLAR', [z, digits]);
 }
 
 /**
  * Shows phasors in rectangular form, real±j·imaginary.
- * @customfunction RECT
- * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @customfunction TORECT
+ * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
- * @returns {any[][]} Rectangular text, e.g. 47.5498-j34.0565; one row per phasor.
+ * @returns {any[][]} Rectangular text, e.g. 24.5413-j9.2778; one row per phasor.
  */
-export function RECT(z: any[][], digits?: any): any[][] {
-  return invoke('RECT', [z, digits]);
+export function TORECT(z: any[][], digits?: any): any[][] {
+  return invoke('TORECT', [z, digits]);
 }
 
 /**
@@ -56,7 +56,7 @@ export function FROMRECT(real: any[][], imag: any[][], digits?: any): any[][] {
 /**
  * Magnitude |z| of each phasor, as a number at full precision.
  * @customfunction MAG
- * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @returns {any[][]} Numbers in the phasor’s own unit (V, A, Ω …); one row per phasor.
  */
 export function MAG(z: any[][]): any[][] {
@@ -66,7 +66,7 @@ export function MAG(z: any[][]): any[][] {
 /**
  * Angle of each phasor, in degrees (−180, 180] or, with "rad", radians; 0 for a zero phasor.
  * @customfunction ANGLE
- * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [unit] "deg" (default) or "rad".
  * @returns {any[][]} Numbers at full precision; one row per phasor.
  */
@@ -76,28 +76,28 @@ export function ANGLE(z: any[][], unit?: any): any[][] {
 
 /**
  * Real part of each phasor (resistance of an impedance, active power of a complex power).
- * @customfunction RE
- * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @customfunction REAL
+ * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @returns {any[][]} Numbers at full precision; one row per phasor.
  */
-export function RE(z: any[][]): any[][] {
-  return invoke('RE', [z]);
+export function REAL(z: any[][]): any[][] {
+  return invoke('REAL', [z]);
 }
 
 /**
  * Imaginary part of each phasor (reactance of an impedance, reactive power of a complex power).
- * @customfunction IM
- * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @customfunction IMAG
+ * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @returns {any[][]} Numbers at full precision; one row per phasor.
  */
-export function IM(z: any[][]): any[][] {
-  return invoke('IM', [z]);
+export function IMAG(z: any[][]): any[][] {
+  return invoke('IMAG', [z]);
 }
 
 /**
  * Splits phasors into two numeric columns: real and imaginary, or with "polar" magnitude and angle in degrees.
  * @customfunction SPLIT
- * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [form] "rect" (default) or "polar".
  * @returns {any[][]} An n×2 block of numbers at full precision, one row per phasor.
  */
@@ -107,19 +107,19 @@ export function SPLIT(z: any[][], form?: any): any[][] {
 
 /**
  * Phasor sum of every value given (cells, ranges, pairs); blanks are skipped.
- * @customfunction SUM
- * @param {any[][][]} z Phasors to add: one or more cells, ranges or values (blanks are skipped).
+ * @customfunction ADD
+ * @param {any[][][]} z1 Phasors to add: one or more cells, ranges or values (blanks are skipped).
  * @returns {any[][]} One phasor, polar text.
  */
-export function SUM(z: any[][][]): any[][] {
-  return invoke('SUM', [z]);
+export function ADD(z1: any[][][]): any[][] {
+  return invoke('ADD', [z1]);
 }
 
 /**
  * Difference a − b, row by row (a single value is used for every row), e.g. a line voltage from two phase voltages.
  * @customfunction SUB
- * @param {any[][]} a Phasors to subtract from: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
- * @param {any[][]} b Phasors to subtract: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} a Phasors to subtract from: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
+ * @param {any[][]} b Phasors to subtract: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per pair.
  */
@@ -130,18 +130,18 @@ export function SUB(a: any[][], b: any[][], digits?: any): any[][] {
 /**
  * Product of every value given (cells, ranges, pairs); blanks are skipped. E.g. V = I·Z.
  * @customfunction MUL
- * @param {any[][][]} z Phasors to multiply: one or more cells, ranges or values (blanks are skipped).
+ * @param {any[][][]} z1 Phasors to multiply: one or more cells, ranges or values (blanks are skipped).
  * @returns {any[][]} One phasor, polar text.
  */
-export function MUL(z: any[][][]): any[][] {
-  return invoke('MUL', [z]);
+export function MUL(z1: any[][][]): any[][] {
+  return invoke('MUL', [z1]);
 }
 
 /**
  * Quotient a / b, row by row (a single value is used for every row), e.g. I = V / Z.
  * @customfunction DIV
- * @param {any[][]} a Dividends: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
- * @param {any[][]} b Divisors (not 0): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} a Dividends: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
+ * @param {any[][]} b Divisors (not 0): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per pair.
  */
@@ -152,7 +152,7 @@ export function DIV(a: any[][], b: any[][], digits?: any): any[][] {
 /**
  * Complex conjugate of each phasor (the angle changes sign), as in S = V·I*.
  * @customfunction CONJ
- * @param {any[][]} z Phasors: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} z Phasors: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per phasor.
  */
@@ -163,7 +163,7 @@ export function CONJ(z: any[][], digits?: any): any[][] {
 /**
  * Reciprocal 1/z of each phasor, e.g. the admittance Y = 1/Z of an impedance.
  * @customfunction INV
- * @param {any[][]} z Phasors (not 0): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} z Phasors (not 0): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per phasor (an impedance in Ω gives an admittance in S).
  */
@@ -174,17 +174,17 @@ export function INV(z: any[][], digits?: any): any[][] {
 /**
  * Impedance of branches in parallel, 1 / Σ(1/Zk); blanks are skipped.
  * @customfunction PARALLEL
- * @param {any[][][]} z Branch impedances: one or more cells, ranges or values (blanks are skipped).
+ * @param {any[][][]} z1 Branch impedances: one or more cells, ranges or values (blanks are skipped).
  * @returns {any[][]} One impedance, polar text.
  */
-export function PARALLEL(z: any[][][]): any[][] {
-  return invoke('PARALLEL', [z]);
+export function PARALLEL(z1: any[][][]): any[][] {
+  return invoke('PARALLEL', [z1]);
 }
 
 /**
  * Turns phasors by an angle in degrees (positive counter-clockwise): z·1∠θ. Rotating by 120° applies the operator a.
  * @customfunction ROTATE
- * @param {any[][]} z Phasors: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} z Phasors: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} degrees Angle to turn by, in degrees: a number or a column.
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per phasor/angle pair (a single value is used for every row).
@@ -209,7 +209,7 @@ export function BALANCED(magnitude: any, sequence?: any, angle?: any, digits?: a
 /**
  * Line-to-line voltages V12, V23, V31 of three phase (line-to-neutral) voltages.
  * @customfunction LINEVOLTS
- * @param {any[][]} phase_set Phase voltages V1, V2, V3 (three values): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} phase_set Phase voltages V1, V2, V3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} A 3×1 column of polar text: V12, V23, V31.
  */
@@ -220,7 +220,7 @@ export function LINEVOLTS(phase_set: any[][], digits?: any): any[][] {
 /**
  * The star (phase) voltages with the given line-to-line voltages and no zero-sequence part.
  * @customfunction STARVOLTS
- * @param {any[][]} line_set Line-to-line voltages V12, V23, V31 (three values): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} line_set Line-to-line voltages V12, V23, V31 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} A 3×1 column of polar text: V1, V2, V3.
  */
@@ -257,8 +257,8 @@ export function STARTODELTA(z1: any[][], z2?: any[][], z3?: any[][], digits?: an
 /**
  * Current through an impedance, I = V / Z, row by row (a single value is used for every row).
  * @customfunction CURRENT
- * @param {any[][]} voltage Voltages across the impedances: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
- * @param {any[][]} impedance Impedances (not 0): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} voltage Voltages across the impedances: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
+ * @param {any[][]} impedance Impedances (not 0): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per pair.
  */
@@ -282,8 +282,8 @@ export function COMPLEXPOWER(real_power: any[][], power_factor: any[][], leading
 /**
  * Current a load of complex power S draws at voltage V: I = (S / V)*, row by row.
  * @customfunction LOADCURRENT
- * @param {any[][]} voltage Voltages across the loads (not 0): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
- * @param {any[][]} power Complex powers S = P + jQ: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} voltage Voltages across the loads (not 0): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
+ * @param {any[][]} power Complex powers S = P + jQ: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per pair.
  */
@@ -293,30 +293,30 @@ export function LOADCURRENT(voltage: any[][], power: any[][], digits?: any): any
 
 /**
  * Complex power S = V·I*, row by row: real part P (W), imaginary part Q (var, positive when inductive).
- * @customfunction POWER
- * @param {any[][]} voltage Voltages across the loads: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
- * @param {any[][]} current Currents into the loads: text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @customfunction VIPOWER
+ * @param {any[][]} voltage Voltages across the loads: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
+ * @param {any[][]} current Currents into the loads: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} Polar text, one row per pair.
  */
-export function POWER(voltage: any[][], current: any[][], digits?: any): any[][] {
-  return invoke('POWER', [voltage, current, digits]);
+export function VIPOWER(voltage: any[][], current: any[][], digits?: any): any[][] {
+  return invoke('VIPOWER', [voltage, current, digits]);
 }
 
 /**
  * Power factor P/|S| of complex powers, as numbers.
- * @customfunction PF
- * @param {any[][]} power Complex powers S = P + jQ (not 0): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @customfunction POWERFACTOR
+ * @param {any[][]} power Complex powers S = P + jQ (not 0): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @returns {any[][]} Numbers, one row per value.
  */
-export function PF(power: any[][]): any[][] {
-  return invoke('PF', [power]);
+export function POWERFACTOR(power: any[][]): any[][] {
+  return invoke('POWERFACTOR', [power]);
 }
 
 /**
  * Solves a star (wye) load fed from a star source: line currents, load voltages and powers, neutral current, star-point shift.
  * @customfunction STARLOAD
- * @param {any[][]} phase_voltages Source phase (line-to-neutral) voltages E1, E2, E3 (three values): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} phase_voltages Source phase voltages E1, E2, E3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} impedances Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.
  * @param {any[][]} [neutral] Blank or 0 = solid neutral (default); an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral.
  * @param {any[][]} [line] Line impedance: one for every line, or three (default none).
@@ -331,7 +331,7 @@ export function STARLOAD(phase_voltages: any[][], impedances: any[][], neutral?:
 /**
  * Solves a delta load from its line-to-line voltages: line currents, branch currents, branch voltages and powers.
  * @customfunction DELTALOAD
- * @param {any[][]} line_voltages Supply line-to-line voltages V12, V23, V31 (three values): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} line_voltages Line-to-line voltages V12, V23, V31 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} impedances Branch impedances Z12, Z23, Z31 (three, or one for all); "open" for a missing branch.
  * @param {any[][]} [line] Line impedance: one for every line, or three (default none).
  * @param {any} [labels] TRUE adds a header row and a label column (default FALSE).
@@ -345,11 +345,11 @@ export function DELTALOAD(line_voltages: any[][], impedances: any[][], line?: an
 /**
  * Neutral current of a four-wire circuit: the phasor sum I1 + I2 + I3 (Kirchhoff’s current law at the star point).
  * @customfunction NEUTRAL
- * @param {any[][][]} currents Phase currents: one range of three, a three-column range, or i1, i2, i3 (cells, columns or pairs).
+ * @param {any[][][]} i1 Phase currents: one range of three, a three-column range, or i1, i2, i3 (cells, columns or pairs).
  * @returns {any[][]} Polar text: one neutral current, or one per row.
  */
-export function NEUTRAL(currents: any[][][]): any[][] {
-  return invoke('NEUTRAL', [currents]);
+export function NEUTRAL(i1: any[][][]): any[][] {
+  return invoke('NEUTRAL', [i1]);
 }
 
 /**
@@ -367,7 +367,7 @@ export function NEUTRAL120(i1: any[][], i2?: any[][], i3?: any[][]): any[][] {
 /**
  * rms neutral current of three phase currents with harmonics: triplens add in the neutral, the others cancel when balanced.
  * @customfunction NEUTRALRMS
- * @param {any[][]} currents Fundamental phase currents I1, I2, I3 (three values): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} currents Fundamental phase currents I1, I2, I3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} harmonics Rows of [order, percent] or [order, p1, p2, p3]; order a whole number ≥ 2, percent ≥ 0.
  * @returns {any[][]} A number: the rms neutral current (same unit as the currents).
  */
@@ -399,32 +399,32 @@ export function NEUTRALDEMAND(unbalanced_load: any, nonlinear_load?: any): any[]
 
 /**
  * Symmetrical components (zero, positive, negative sequence) of three phase values, referred to phase 1.
- * @customfunction SEQUENCE
- * @param {any[][]} phases Phase values of phases 1, 2, 3 (three values): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @customfunction SEQCOMP
+ * @param {any[][]} phases Values of phases 1, 2, 3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} A 3×1 column of polar text: zero, positive, negative sequence.
  */
-export function SEQUENCE(phases: any[][], digits?: any): any[][] {
-  return invoke('SEQUENCE', [phases, digits]);
+export function SEQCOMP(phases: any[][], digits?: any): any[][] {
+  return invoke('SEQCOMP', [phases, digits]);
 }
 
 /**
  * Phase values of phases 1, 2, 3 from zero, positive and negative sequence components (referred to phase 1).
- * @customfunction FROMSEQUENCE
+ * @customfunction FROMSEQCOMP
  * @param {any[][]} zero Zero-sequence component, or a range of three: zero, positive, negative.
  * @param {any[][]} [positive] Positive-sequence component (omit when zero holds all three).
  * @param {any[][]} [negative] Negative-sequence component (omit when zero holds all three).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
  * @returns {any[][]} A 3×1 column of polar text: phases 1, 2, 3.
  */
-export function FROMSEQUENCE(zero: any[][], positive?: any[][], negative?: any[][], digits?: any): any[][] {
-  return invoke('FROMSEQUENCE', [zero, positive, negative, digits]);
+export function FROMSEQCOMP(zero: any[][], positive?: any[][], negative?: any[][], digits?: any): any[][] {
+  return invoke('FROMSEQCOMP', [zero, positive, negative, digits]);
 }
 
 /**
  * Unbalance of three voltages (or currents) in percent: VUF (default), ZERO, LVUR, PVUR or MAG.
  * @customfunction UNBALANCE
- * @param {any[][]} values Three voltages or currents (phasors; plain magnitudes for LVUR, PVUR and MAG): text such as 230∠-120 or 4+j2, a number, a range of such cells, or two numeric columns (real, imaginary).
+ * @param {any[][]} values Three voltages or currents: phasors such as 400∠0 (a range or real/imaginary columns), or magnitudes for LVUR, PVUR, MAG.
  * @param {any} [method] "VUF" (default), "ZERO", "LVUR", "PVUR" or "MAG".
  * @returns {any[][]} A number: the unbalance in percent.
  */

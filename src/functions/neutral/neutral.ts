@@ -13,8 +13,8 @@ export const NEUTRAL = defineFunction({
     'schedule with one circuit per row), or three currents i1, i2, i3 — single values or equal columns. A blank cell ' +
     'is a phase with no current. Fundamental-frequency phasors only: for triplen harmonics use NEUTRALRMS. The ' +
     'currents argument repeats, so it must come last and NEUTRAL takes no digits argument: results have 6 ' +
-    'significant figures (use PHZ.RE and PHZ.IM for full precision).',
-  params: [{ name: 'currents', type: 'repeat', description: 'Phase currents: one range of three, a three-column range, or i1, i2, i3 (cells, columns or pairs).' }],
+    'significant figures (use PHZ.REAL and PHZ.IMAG for full precision).',
+  params: [{ name: 'i1', type: 'repeat', description: 'Phase currents: one range of three, a three-column range, or i1, i2, i3 (cells, columns or pairs).' }],
   result: 'Polar text: one neutral current, or one per row.',
   errors: ['Other than three currents per row, two or more than three arguments, different column lengths, or text that is not a phasor give #VALUE!.'],
   examples: [
@@ -22,8 +22,8 @@ export const NEUTRAL = defineFunction({
     { formula: '=PHZ.NEUTRAL("20∠0", "10∠-120", "10∠120")', result: [['10∠0°']] },
     { formula: '=PHZ.NEUTRAL({"12∠0","8∠-120","10∠120";"5∠0","5∠-120",""})', result: [['3.4641∠30°'], ['5∠-60°']] },
   ],
-  implementation: (currents) => {
-    const rows = phaseRows(repeatGroups(currents), ['i1', 'i2', 'i3'], 'currents', 'current');
+  implementation: (i1) => {
+    const rows = phaseRows(repeatGroups(i1), ['i1', 'i2', 'i3'], 'currents', 'current');
     return phasorColumn(
       rows.map((t) => sumOf(t.filter((z): z is Phasor => z !== null))),
       6,

@@ -42,7 +42,7 @@ export const NEUTRALRMS = defineFunction({
     'others form balanced sets that cancel. The rms neutral current is √(|I_N,1|² + Σ|I_N,h|²) over the fundamental ' +
     'and every order given (components of different frequencies add in rms by root-sum-square). Blank rows are skipped.',
   params: [
-    phasorParam('currents', 'Fundamental phase currents I1, I2, I3 (three values)'),
+    phasorParam('currents', 'Fundamental phase currents I1, I2, I3 (three)'),
     { name: 'harmonics', type: 'matrix', description: 'Rows of [order, percent] or [order, p1, p2, p3]; order a whole number ≥ 2, percent ≥ 0.' },
   ],
   result: 'A number: the rms neutral current (same unit as the currents).',

@@ -1,6 +1,6 @@
 import type { FunctionSpec } from '../spec';
-import { SEQUENCE } from './sequence';
-import { FROMSEQUENCE } from './fromsequence';
+import { SEQCOMP } from './seqcomp';
+import { FROMSEQCOMP } from './fromseqcomp';
 
 /** The functions of group "sequences", in reference order. */
-export const sequencesFunctions: FunctionSpec[] = [SEQUENCE, FROMSEQUENCE];
+export const sequencesFunctions: FunctionSpec[] = [SEQCOMP, FROMSEQCOMP];

@@ -13,7 +13,7 @@ export const STARVOLTS = defineFunction({
     'V1 = (V12 − V31)/3, V2 = (V23 − V12)/3, V3 = (V31 − V23)/3: the only phase set with those line voltages whose ' +
     'phasors sum to zero (the star point at the centroid of the line-voltage triangle). Line voltages always close: ' +
     'V12 + V23 + V31 must be 0 (within 0.01 % of the largest); otherwise they are not line voltages of one supply.',
-  params: [phasorParam('line_set', 'Line-to-line voltages V12, V23, V31 (three values)'), DIGITS],
+  params: [phasorParam('line_set', 'Line-to-line voltages V12, V23, V31 (three)'), DIGITS],
   result: 'A 3×1 column of polar text: V1, V2, V3.',
   errors: ['Other than three values, a blank cell, text that is not a phasor, or a set that does not sum to zero gives #VALUE!.'],
   examples: [{ formula: '=PHZ.STARVOLTS({"400∠30";"400∠-90";"400∠150"})', result: [['230.94∠0°'], ['230.94∠-120°'], ['230.94∠120°']] }],

@@ -21,7 +21,7 @@ export const DELTALOAD = defineFunction({
     'may be "open". Row k: line current I_k, branch current I_k(k+1) (I12, I23, I31), voltage across that branch ' +
     'impedance, and its complex power V·I*. The line voltages must close: V12 + V23 + V31 = 0.',
   params: [
-    phasorParam('line_voltages', 'Supply line-to-line voltages V12, V23, V31 (three values)'),
+    phasorParam('line_voltages', 'Line-to-line voltages V12, V23, V31 (three)'),
     { name: 'impedances', type: 'matrix', description: 'Branch impedances Z12, Z23, Z31 (three, or one for all); "open" for a missing branch.' },
     { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },
     { name: 'labels', type: 'scalar', optional: true, description: 'TRUE adds a header row and a label column (default FALSE).' },

@@ -23,7 +23,7 @@ export const STARLOAD = defineFunction({
     'star-point shift V_N′N, and the total load complex power (line and neutral losses excluded). Units are whatever ' +
     'you give consistently (V and Ω give A and VA). Conventions: phase 2 lags phase 1 by 120° in positive sequence.',
   params: [
-    phasorParam('phase_voltages', 'Source phase (line-to-neutral) voltages E1, E2, E3 (three values)'),
+    phasorParam('phase_voltages', 'Source phase voltages E1, E2, E3 (three)'),
     { name: 'impedances', type: 'matrix', description: 'Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.' },
     { name: 'neutral', type: 'matrix', optional: true, description: 'Blank or 0 = solid neutral (default); an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral.' },
     { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },

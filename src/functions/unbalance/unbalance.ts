@@ -4,7 +4,6 @@ import { magnitude } from '../../core/phasor';
 import { magUnbalance, maxDeviation, vuf, zeroUnbalance, type Triple, type UnbalanceMethod } from '../../core/threephase';
 import { asMatrix, readChoice } from '../readers';
 import { defineFunction } from '../spec';
-import { phasorParam } from '../params';
 import { cellName, isPairBlock, isPlainNumbers, readTriple } from '../sets/_threephase';
 
 const METHODS = ['VUF', 'ZERO', 'LVUR', 'PVUR', 'MAG'] as const satisfies readonly UnbalanceMethod[];
@@ -36,7 +35,11 @@ export const UNBALANCE = defineFunction({
     'u2 = √((1 − √(3 − 6β))/(1 + √(3 − 6β))) × 100 with β = ΣU⁴/(ΣU²)² — equal to VUF for a three-wire supply. ' +
     'LVUR, PVUR and MAG accept plain numbers (magnitudes); VUF and ZERO need phasors.',
   params: [
-    phasorParam('values', 'Three voltages or currents (phasors; plain magnitudes for LVUR, PVUR and MAG)'),
+    {
+      name: 'values',
+      type: 'matrix',
+      description: 'Three voltages or currents: phasors such as 400∠0 (a range or real/imaginary columns), or magnitudes for LVUR, PVUR, MAG.',
+    },
     { name: 'method', type: 'scalar', optional: true, description: '"VUF" (default), "ZERO", "LVUR", "PVUR" or "MAG".' },
   ],
   result: 'A number: the unbalance in percent.',

@@ -140,7 +140,7 @@ describe('delta load identities', () => {
 });
 
 describe('sets, sequences and unbalance identities', () => {
-  it('FROMSEQUENCE(SEQUENCE(x)) = x', () => {
+  it('FROMSEQCOMP(SEQCOMP(x)) = x', () => {
     fc.assert(
       fc.property(triple(phasor(0, 1000)), (x) => {
         const [a, b, c] = toSequence(x);

@@ -1,29 +1,29 @@
-// SUM, SUB, MUL, DIV, CONJ, INV, PARALLEL, ROTATE. Reference: mathjs 15 complex arithmetic
+// ADD, SUB, MUL, DIV, CONJ, INV, PARALLEL, ROTATE. Reference: mathjs 15 complex arithmetic
 // on its own parse of the same values (math.complex), and textbook circuit facts named below.
 import { describe, it, expect } from 'vitest';
 import * as math from 'mathjs';
 import { functions } from '../../../src/functions';
 import { expectClose, expectPhasorClose, expectPhzError, readResult } from '../../helpers';
 
-const { SUM, SUB, MUL, DIV, CONJ, INV, PARALLEL, ROTATE } = functions;
+const { ADD, SUB, MUL, DIV, CONJ, INV, PARALLEL, ROTATE } = functions;
 const one = (r: unknown[][]) => readResult(r[0][0] as string);
 const col = (r: unknown[][]) => r.map((row) => readResult(row[0] as string));
 
-describe('PHZ.SUM', () => {
+describe('PHZ.ADD', () => {
   it('adds every value given, agreeing with mathjs', () => {
-    const ref = math.add(math.add(math.complex('4+2i'), math.complex('1-6i')), math.complex(3, 0));
-    expectPhasorClose(one(SUM([[['4+j2']], [['1-j6']], [[3]]])), ref as math.Complex, 1e-5);
+    const ref = math.add(math.add(math.complex('7+5i'), math.complex('1-6i')), math.complex(3, 0));
+    expectPhasorClose(one(ADD([[['7+j5']], [['1-j6']], [[3]]])), ref as math.Complex, 1e-5);
   });
   it('adds a balanced set to exactly 0 (Kirchhoff at a balanced star point, common practice)', () => {
-    expect(SUM([[['10∠0'], ['10∠-120'], ['10∠120']]])).toEqual([['0']]);
+    expect(ADD([[['10∠0'], ['10∠-120'], ['10∠120']]])).toEqual([['0']]);
   });
   it('reads ranges, pair blocks and skips blanks', () => {
-    expectPhasorClose(one(SUM([[[1, 2], [3, 4]], [['j'], [null], ['']]])), { re: 4, im: 7 }, 1e-6);
+    expectPhasorClose(one(ADD([[[1, 2], [3, 4]], [['j'], [null], ['']]])), { re: 4, im: 7 }, 1e-6);
   });
   it('refuses bad text naming which value, and all-blank input', () => {
-    expect(expectPhzError(() => SUM([[['1']], [['x']]])).message).toMatch(/^z2: cannot read "x"/);
-    expect(expectPhzError(() => SUM([[[null]]])).message).toMatch(/holds no phasor/);
-    expect(expectPhzError(() => SUM([[[true]]])).message).toMatch(/TRUE\/FALSE/);
+    expect(expectPhzError(() => ADD([[['1']], [['x']]])).message).toMatch(/^z2: cannot read "x"/);
+    expect(expectPhzError(() => ADD([[[null]]])).message).toMatch(/holds no phasor/);
+    expect(expectPhzError(() => ADD([[[true]]])).message).toMatch(/TRUE\/FALSE/);
   });
 });
 

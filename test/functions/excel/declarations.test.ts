@@ -95,7 +95,7 @@ const param = (name: string, type: ParamSpec['type'], optional = false): ParamSp
 const spec = (name: string, params: ParamSpec[], extra: Partial<FunctionSpec> = {}): FunctionSpec => ({
   name,
   group: 'arithmetic',
-  summary: `Does ${name.toLowerCase()} to phasors like 4+j2; angle in degrees.`,
+  summary: `Does ${name.toLowerCase()} to phasors like 7+j5; angle in degrees.`,
   params,
   result: 'Polar text, one row per phasor.',
   errors: [],

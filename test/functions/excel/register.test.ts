@@ -76,13 +76,13 @@ describe('registerAll', () => {
   it('turns a PhzError thrown at calculation time into the host error, per function', () => {
     registerAll({
       BAD: () => {
-        throw new PhzError('z: cell 2 of 3 ("4+k2") is not a phasor. Write it as 4+j2 or 4∠30.');
+        throw new PhzError('z: cell 2 of 3 ("7+k5") is not a phasor. Write it as 7+j5 or 4∠30.');
       },
     });
     const [[, wrapped]] = associate.mock.calls;
-    const e = hostErrorOf(() => wrapped([['4+k2']]));
+    const e = hostErrorOf(() => wrapped([['7+k5']]));
     expect(e.code).toBe('#VALUE!');
-    expect(e.message).toBe('z: cell 2 of 3 ("4+k2") is not a phasor. Write it as 4+j2 or 4∠30.');
+    expect(e.message).toBe('z: cell 2 of 3 ("7+k5") is not a phasor. Write it as 7+j5 or 4∠30.');
   });
 });
 

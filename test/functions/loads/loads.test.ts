@@ -68,7 +68,7 @@ describe('PHZ.LOADCURRENT', () => {
   it('round trip with POWER: POWER(V, LOADCURRENT(V, S)) = S', () => {
     const s = rect(3100, -1200);
     const i = call('LOADCURRENT', '231∠-118', '3100-j1200', 15);
-    expectPhasorClose(ph(call('POWER', '231∠-118', i, 15)[0][0]), s, 1e-12);
+    expectPhasorClose(ph(call('VIPOWER', '231∠-118', i, 15)[0][0]), s, 1e-12);
   });
   it('blank cell, wrong type, wrong count', () => {
     expectMessage(() => call('LOADCURRENT', '', '1000'), /voltage is blank/);
@@ -80,44 +80,44 @@ describe('PHZ.LOADCURRENT', () => {
   });
 });
 
-describe('PHZ.POWER', () => {
+describe('PHZ.VIPOWER', () => {
   it('normal use: 230∠0 V and 10∠−36.87° A → 1840 + j1380 VA (positive Q: inductive)', () => {
-    expectPhasorClose(ph(call('POWER', '230∠0', '10∠-36.86989764584402', 15)[0][0]), rect(1840, 1380), 1e-12);
+    expectPhasorClose(ph(call('VIPOWER', '230∠0', '10∠-36.86989764584402', 15)[0][0]), rect(1840, 1380), 1e-12);
   });
   it('range input: per phase', () => {
-    const r = phs(call('POWER', col('230∠0', '230∠-120'), col('10∠0', '10∠-150'), 15));
+    const r = phs(call('VIPOWER', col('230∠0', '230∠-120'), col('10∠0', '10∠-150'), 15));
     expectPhasorClose(r[1], polarDeg(2300, 30));
   });
   it('blank cell, wrong type, wrong count', () => {
-    expectMessage(() => call('POWER', col('230', null), col(1, 2)), /voltage, row 2 is blank/);
-    expectMessage(() => call('POWER', '230', true), /TRUE\/FALSE/);
-    expectMessage(() => call('POWER', col(1, 2), col(1, 2, 3)), /different numbers of values/);
+    expectMessage(() => call('VIPOWER', col('230', null), col(1, 2)), /voltage, row 2 is blank/);
+    expectMessage(() => call('VIPOWER', '230', true), /TRUE\/FALSE/);
+    expectMessage(() => call('VIPOWER', col(1, 2), col(1, 2, 3)), /different numbers of values/);
   });
   it('domain: zero current gives zero power, shown as 0', () => {
-    expect(call('POWER', '230∠0', 0)).toEqual([['0']]);
+    expect(call('VIPOWER', '230∠0', 0)).toEqual([['0']]);
   });
 });
 
-describe('PHZ.PF', () => {
+describe('PHZ.POWERFACTOR', () => {
   it('normal use: 8000 + j6000 VA → 0.8', () => {
-    expect(call('PF', '8000+j6000')).toEqual([[0.8]]);
+    expect(call('POWERFACTOR', '8000+j6000')).toEqual([[0.8]]);
   });
   it('range input: a column, and the COMPLEXPOWER round trip', () => {
-    const r = call('PF', col('3+j4', 5, '-4+j3'));
+    const r = call('POWERFACTOR', col('3+j4', 5, '-4+j3'));
     expectClose(r[0][0] as number, 0.6);
     expectClose(r[1][0] as number, 1);
     expectClose(r[2][0] as number, -0.8);
-    expectClose(call('PF', call('COMPLEXPOWER', 1234, 0.73, true, 15))[0][0] as number, 0.73, 1e-12);
+    expectClose(call('POWERFACTOR', call('COMPLEXPOWER', 1234, 0.73, true, 15))[0][0] as number, 0.73, 1e-12);
   });
   it('blank cell and wrong type', () => {
-    expectMessage(() => call('PF', col('3+j4', '')), /power, row 2 is blank/);
-    expectMessage(() => call('PF', '5 A'), /power/);
+    expectMessage(() => call('POWERFACTOR', col('3+j4', '')), /power, row 2 is blank/);
+    expectMessage(() => call('POWERFACTOR', '5 A'), /power/);
   });
   it('wrong count: too many arguments', () => {
-    expectMessage(() => call('PF', '3+j4', 6), /takes at most 1 argument/);
+    expectMessage(() => call('POWERFACTOR', '3+j4', 6), /takes at most 1 argument/);
   });
   it('domain error: zero power has no power factor', () => {
-    expectMessage(() => call('PF', 0), /power is 0 VA/);
+    expectMessage(() => call('POWERFACTOR', 0), /power is 0 VA/);
   });
 });
 
@@ -127,13 +127,13 @@ describe('loads — Alexander & Sadiku, Fundamentals of Electric Circuits, Examp
   const v = `${60 / Math.SQRT2}∠-10`;
   const i = `${1.5 / Math.SQRT2}∠50`;
   it('Ex. 11.11 (a, b): POWER gives S = 45∠−60° VA, P = 22.5 W, Q = −38.97 var', () => {
-    const s = ph(call('POWER', v, i, 15)[0][0]);
+    const s = ph(call('VIPOWER', v, i, 15)[0][0]);
     expectPhasorClose(s, polarDeg(45, -60), 1e-12);
     expectClose(s.re, 22.5, 1e-12);
     expectClose(s.im, -38.97, 1e-4);
   });
   it('Ex. 11.11 (c): PF gives 0.5 and CURRENT through Z = 40∠−60° Ω gives back the current', () => {
-    expectClose(call('PF', call('POWER', v, i, 15))[0][0] as number, 0.5, 1e-12);
+    expectClose(call('POWERFACTOR', call('VIPOWER', v, i, 15))[0][0] as number, 0.5, 1e-12);
     expectPhasorClose(ph(call('CURRENT', v, '40∠-60', 15)[0][0]), polarDeg(1.5 / Math.SQRT2, 50), 1e-12);
   });
   it('Ex. 11.11: LOADCURRENT of S = 45∠−60° VA at v gives the current', () => {

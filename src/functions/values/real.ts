@@ -3,14 +3,14 @@ import { column, readPhasors } from '../readers';
 import { phasorParam } from '../params';
 
 /** Real part of each phasor, full precision. */
-export const RE = defineFunction({
-  name: 'RE',
+export const REAL = defineFunction({
+  name: 'REAL',
   group: 'values',
   summary: 'Real part of each phasor (resistance of an impedance, active power of a complex power).',
   params: [phasorParam('z', 'Phasors in any notation')],
   result: 'Numbers at full precision; one row per phasor.',
   errors: ['A blank cell or text that is not a phasor gives #VALUE! naming the cell.'],
-  examples: [{ formula: '=PHZ.RE("4-j2")', result: [[4]] },
-    { formula: '=PHZ.RE("10∠90")', result: [[0]] }],
+  examples: [{ formula: '=PHZ.REAL("7-j5")', result: [[7]] },
+    { formula: '=PHZ.REAL("10∠90")', result: [[0]] }],
   implementation: (z) => column(readPhasors(z, 'z').map((p) => p.re)),
 });

@@ -4,20 +4,20 @@ import { phasorColumn, readRepeatedPhasors } from '../readers';
 import { repeatParam } from '../params';
 
 /** Phasor sum of every value given. */
-export const SUM = defineFunction({
-  name: 'SUM',
+export const ADD = defineFunction({
+  name: 'ADD',
   group: 'arithmetic',
   summary: 'Phasor sum of every value given (cells, ranges, pairs); blanks are skipped.',
   details:
     'Use it for Kirchhoff’s current law at a node, e.g. the neutral current as the sum of the line currents. ' +
-    'The repeating argument must come last, so SUM takes no digits argument: the result has 6 significant figures ' +
-    '(wrap the sum in PHZ.RE/PHZ.IM for full precision).',
-  params: [repeatParam('z', 'Phasors to add')],
+    'The repeating argument must come last, so ADD takes no digits argument: the result has 6 significant figures ' +
+    '(wrap the sum in PHZ.REAL/PHZ.IMAG for full precision).',
+  params: [repeatParam('z1', 'Phasors to add')],
   result: 'One phasor, polar text.',
   errors: ['Text that is not a phasor gives #VALUE! naming the argument and cell; all blanks give #VALUE!.'],
   examples: [
-    { formula: '=PHZ.SUM("10∠0", "10∠-120", "10∠120")', result: [['0']] },
-    { formula: '=PHZ.SUM("4+j2", "1-j6", 3)', result: [['8.94427∠-26.5651°']] },
+    { formula: '=PHZ.ADD("10∠0", "10∠-120", "10∠120")', result: [['0']] },
+    { formula: '=PHZ.ADD("7+j5", "1-j6", 3)', result: [['11.0454∠-5.19443°']] },
   ],
   implementation: (z) => phasorColumn([sumOf(readRepeatedPhasors(z, 'z'))], 6),
 });

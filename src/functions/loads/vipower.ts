@@ -4,17 +4,17 @@ import { phasorColumn, readDigits, readPhasors, zipWith } from '../readers';
 import { DIGITS, phasorParam } from '../params';
 
 /** Complex power S = V·I*. */
-export const POWER = defineFunction({
-  name: 'POWER',
+export const VIPOWER = defineFunction({
+  name: 'VIPOWER',
   group: 'loads',
   summary: 'Complex power S = V·I*, row by row: real part P (W), imaginary part Q (var, positive when inductive).',
-  details: 'With V in volts and I in amperes, S is in VA. Use PHZ.RE and PHZ.IM for P and Q at full precision.',
+  details: 'With V in volts and I in amperes, S is in VA. Use PHZ.REAL and PHZ.IMAG for P and Q at full precision.',
   params: [phasorParam('voltage', 'Voltages across the loads'), phasorParam('current', 'Currents into the loads'), DIGITS],
   result: 'Polar text, one row per pair.',
   errors: ['A blank cell, text that is not a phasor, or different counts give #VALUE!.'],
   examples: [
-    { formula: '=PHZ.POWER("230∠0", "10∠-36.8699")', result: [['2300∠36.8699°']] },
-    { formula: '=PHZ.POWER({"230∠0";"230∠-120"}, {"10∠0";"5∠-180"})', result: [['2300∠0°'], ['1150∠60°']] },
+    { formula: '=PHZ.VIPOWER("230∠0", "10∠-36.8699")', result: [['2300∠36.8699°']] },
+    { formula: '=PHZ.VIPOWER({"230∠0";"230∠-120"}, {"10∠0";"5∠-180"})', result: [['2300∠0°'], ['1150∠60°']] },
   ],
   implementation: (voltage, current, digits) => {
     const d = readDigits(digits);

@@ -3,16 +3,16 @@ import { readDigits, readPhasors, phasorColumn } from '../readers';
 import { DIGITS, phasorParam } from '../params';
 
 /** Shows phasors in polar form, magnitude∠angle°. */
-export const POLAR = defineFunction({
-  name: 'POLAR',
+export const TOPOLAR = defineFunction({
+  name: 'TOPOLAR',
   group: 'values',
   summary: 'Shows phasors in polar form, magnitude∠angle° (angle in degrees, −180 to 180).',
   params: [phasorParam('z', 'Phasors in any notation'), DIGITS],
-  result: 'Polar text, e.g. 53.6656∠-26.5651°; one row per phasor.',
+  result: 'Polar text, e.g. 26.2365∠-20.709°; one row per phasor.',
   errors: ['A blank cell or text that is not a phasor gives #VALUE! naming the cell.'],
   examples: [
-    { formula: '=PHZ.POLAR("48-j24")', result: [['53.6656∠-26.5651°']] },
-    { formula: '=PHZ.POLAR("3+j4", 3)', result: [['5∠53.1°']] },
+    { formula: '=PHZ.TOPOLAR("24.5413-j9.2778")', result: [['26.2365∠-20.709°']] },
+    { formula: '=PHZ.TOPOLAR("3+j4", 3)', result: [['5∠53.1°']] },
   ],
   implementation: (z, digits) => phasorColumn(readPhasors(z, 'z'), readDigits(digits), 'polar'),
 });
