@@ -1,11 +1,15 @@
 /**
  * After `npm run build`: the built dist/functions.json lists every registry entry, in
- * order, with matrix phasor parameters and matrix results, and the production add-in
- * bundle holds no HyperFormula. Run by .ci/run; exits non-zero on any mismatch.
+ * order, with matrix phasor parameters and matrix results; the production add-in bundle
+ * holds no HyperFormula; and the built bundle, loaded beside Excel's own custom-functions
+ * runtime and called through it with host messages shaped by dist/functions.json, gives
+ * every documented example (test/host/). Run by .ci/run; exits non-zero on any mismatch.
  */
 import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { specs } from '../src/functions';
+import { ExcelRuntime } from '../test/host/excel-runtime';
+import { HostEvaluator } from '../test/host/host-examples';
 
 interface MetaParam {
   name: string;
@@ -41,8 +45,43 @@ for (const s of specs) {
 for (const file of readdirSync(dist).filter((f) => /^taskpane.*\.js$/.test(f))) {
   if (/HyperFormula|hyperformula/.test(readFileSync(join(dist, file), 'utf8'))) problems.push(`${file} contains HyperFormula`);
 }
-if (problems.length > 0) {
-  console.error(`dist check failed:\n- ${problems.join('\n- ')}`);
-  process.exit(1);
+/** Same cell text; numbers within 1e-9 relative. */
+function sameCells(got: unknown, want: ReadonlyArray<ReadonlyArray<unknown>>): boolean {
+  if (!Array.isArray(got) || got.length !== want.length) return false;
+  return want.every((row, r) => {
+    const g = got[r] as unknown[];
+    if (!Array.isArray(g) || g.length !== row.length) return false;
+    return row.every((w, c) =>
+      typeof w === 'number' ? typeof g[c] === 'number' && Math.abs((g[c] as number) - w) <= 1e-9 * Math.max(1, Math.abs(w)) : g[c] === w,
+    );
+  });
 }
-console.log(`dist check: functions.json lists all ${names.length} registry functions with matrix parameters; no HyperFormula in the add-in bundle`);
+
+/** Every documented example through Excel's runtime and the built taskpane.js. */
+async function examplesThroughBundle(): Promise<number> {
+  const runtime = ExcelRuntime.load();
+  runtime.runScript(readFileSync(join(dist, 'taskpane.js'), 'utf8'), 'taskpane.js');
+  runtime.sendMetadata(meta.functions);
+  const evaluator = new HostEvaluator(runtime, meta.functions);
+  const examples = specs.flatMap((s) => s.examples);
+  const settled = await Promise.allSettled(examples.map((e) => evaluator.formula(e.formula)));
+  settled.forEach((r, i) => {
+    const e = examples[i];
+    if (r.status === 'rejected') problems.push(`${e.formula} failed through the bundle: ${String((r.reason as Error)?.message ?? r.reason)}`);
+    else if (!sameCells(r.value, e.result)) problems.push(`${e.formula} gave ${JSON.stringify(r.value)} through the bundle, documented ${JSON.stringify(e.result)}`);
+  });
+  evaluator.dispose();
+  return examples.length;
+}
+
+void examplesThroughBundle().then((count) => {
+  if (problems.length > 0) {
+    console.error(`dist check failed:\n- ${problems.join('\n- ')}`);
+    process.exit(1);
+  }
+  console.log(
+    `dist check: functions.json lists all ${names.length} registry functions with matrix parameters; no HyperFormula in the add-in bundle; ` +
+      `all ${count} documented examples give their results through Excel's custom-functions runtime and the built bundle`,
+  );
+  process.exit(0);
+});

@@ -4,7 +4,7 @@
  * comes from the generated declarations.ts, which the runtime does not import, so each
  * function is associated exactly once, here.
  */
-import { functions } from '../index';
+import { functions, specs } from '../index';
 import type { HostResult } from '../spec';
 import { isPhzError } from '../../core/errors';
 
@@ -46,11 +46,18 @@ export function toHostError(e: unknown): CustomFunctions.Error {
   return new CustomFunctions.Error(CustomFunctions.ErrorCode.invalidValue, GENERIC_MESSAGE);
 }
 
-/** Wraps one implementation for Excel: same arguments and result, host errors on failure. */
-export function hostWrapper(name: string, implementation: Implementation): Implementation {
+/**
+ * Wraps one implementation for Excel. Excel's custom-functions runtime calls every function
+ * with one value per declared parameter (`null` when left out) and then appends an
+ * invocation object (office-js custom-functions-runtime.debug.js, `_batchInvocationEntries`:
+ * `message.parameterValues.push(invocationContext)`). The wrapper passes on exactly the
+ * `declared` parameters, so the invocation object never reaches the readers, and turns
+ * errors into host errors.
+ */
+export function hostWrapper(name: string, implementation: Implementation, declared: number): Implementation {
   const wrapped = (...args: any[]): HostResult => {
     try {
-      return implementation(...args);
+      return implementation(...(args.length > declared ? args.slice(0, declared) : args));
     } catch (e) {
       throw toHostError(e);
     }
@@ -68,17 +75,27 @@ export function invoke(name: string, args: readonly unknown[]): HostResult {
   if (!implementation) {
     throw new CustomFunctions.Error(CustomFunctions.ErrorCode.notAvailable, fitHostMessage(`PHZ.${name} is not in this version of Starpoint.`));
   }
-  return hostWrapper(name, implementation)(...args);
+  return hostWrapper(name, implementation, args.length)(...args);
+}
+
+/** What registration needs of one function: its id, its implementation, how many parameters it declares. */
+export interface Registration {
+  readonly name: string;
+  readonly implementation: Implementation;
+  /** The number of parameters in functions.json; a repeating parameter counts once. */
+  readonly declared: number;
+}
+
+/** The project registry, as registrations. */
+export function registryEntries(): Registration[] {
+  return specs.map((s) => ({ name: s.name, implementation: functions[s.name], declared: s.params.length }));
 }
 
 /**
- * Associates every function of `registry` (default: the project registry) with Excel and
- * returns the names associated. Call once per runtime, before Excel evaluates a function.
+ * Associates every entry (default: the project registry) with Excel and returns the names
+ * associated. Call once per runtime, before Excel evaluates a function.
  */
-export function registerAll(registry: Readonly<Record<string, Implementation>> = functions): string[] {
-  const names = Object.keys(registry);
-  for (const name of names) {
-    CustomFunctions.associate(name, hostWrapper(name, registry[name]));
-  }
-  return names;
+export function registerAll(entries: readonly Registration[] = registryEntries()): string[] {
+  for (const e of entries) CustomFunctions.associate(e.name, hostWrapper(e.name, e.implementation, e.declared));
+  return entries.map((e) => e.name);
 }

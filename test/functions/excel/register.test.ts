@@ -65,7 +65,7 @@ describe('registerAll', () => {
   it('associates wrappers that pass the host arguments and the result through unchanged', () => {
     const result = [['5∠53.1301°'], ['1∠0°']];
     const impl = vi.fn(() => result);
-    registerAll({ ONE: impl });
+    registerAll([{ name: 'ONE', implementation: impl, declared: 2 }]);
     const [[name, wrapped]] = associate.mock.calls;
     expect(name).toBe('ONE');
     const z = [['3+j4'], [1]];
@@ -73,12 +73,36 @@ describe('registerAll', () => {
     expect(impl).toHaveBeenCalledWith(z, null);
   });
 
+  it('passes only the declared parameters on: the invocation object Excel appends never reaches the function', () => {
+    // The shipped runtime appends an InvocationContext after the declared parameters
+    // (custom-functions-runtime.debug.js, _batchInvocationEntries); test/functions/excel/runtime.test.ts
+    // drives that runtime itself.
+    const impl = vi.fn((...args: unknown[]) => [[args.length]]);
+    registerAll([{ name: 'TWO', implementation: impl, declared: 2 }]);
+    const [[, wrapped]] = associate.mock.calls;
+    const invocation = { functionName: 'TWO', address: 'Sheet1!A1' };
+    expect(wrapped([['1']], null, invocation)).toEqual([[2]]);
+    expect(impl).toHaveBeenCalledWith([['1']], null);
+  });
+
+  it('gives every registry function its declared parameter count, so a real host call succeeds', () => {
+    registerAll();
+    const byName = new Map(associate.mock.calls.map(([n, f]) => [n as string, f as (...a: unknown[]) => unknown]));
+    const invocation = { functionName: 'PHZ.MAG', address: 'Sheet1!B2' };
+    expect(byName.get('MAG')!([['3+j4']], invocation)).toEqual([[5]]);
+    expect(byName.get('DIV')!([['230∠-120']], [['8+j6']], null, invocation)).toEqual([['23∠-156.87°']]);
+  });
+
   it('turns a PhzError thrown at calculation time into the host error, per function', () => {
-    registerAll({
-      BAD: () => {
-        throw new PhzError('z: cell 2 of 3 ("7+k5") is not a phasor. Write it as 7+j5 or 4∠30.');
+    registerAll([
+      {
+        name: 'BAD',
+        declared: 1,
+        implementation: () => {
+          throw new PhzError('z: cell 2 of 3 ("7+k5") is not a phasor. Write it as 7+j5 or 4∠30.');
+        },
       },
-    });
+    ]);
     const [[, wrapped]] = associate.mock.calls;
     const e = hostErrorOf(() => wrapped([['7+k5']]));
     expect(e.code).toBe('#VALUE!');
@@ -143,7 +167,7 @@ describe('fitHostMessage', () => {
 
 describe('hostWrapper and invoke', () => {
   it('names the wrapper after the function for host diagnostics', () => {
-    expect(hostWrapper('DIV', () => [[1]]).name).toBe('PHZ.DIV');
+    expect(hostWrapper('DIV', () => [[1]], 3).name).toBe('PHZ.DIV');
   });
 
   it('invoke calls the registry implementation by name', () => {
