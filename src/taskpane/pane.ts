@@ -8,6 +8,7 @@ import { specs as registrySpecs } from '../functions/index';
 import type { FunctionSpec } from '../functions/spec';
 import type { WorkbookPort } from './port';
 import { buildReference, countEntries, type ReferenceEntry, type ReferenceExample } from './reference';
+import { paneParts, type PanePart, type PartHandle } from './parts';
 
 const STYLE_ID = 'starpoint-pane-style';
 
@@ -16,6 +17,8 @@ export interface PaneHandle {
   readonly element: HTMLElement;
   /** Sets the search text and filters the reference, as if typed. */
   search(query: string): void;
+  /** Shows a tab: `reference` or a part's id. */
+  showTab(id: string): void;
   /** Empties `root`. */
   unmount(): void;
 }
@@ -23,6 +26,8 @@ export interface PaneHandle {
 export interface PaneOptions {
   /** The functions to list; defaults to the project registry. */
   readonly specs?: readonly FunctionSpec[];
+  /** The parts beside the reference; defaults to `paneParts`. */
+  readonly parts?: readonly PanePart[];
 }
 
 let mountCount = 0;
@@ -199,15 +204,9 @@ export function mountPane(root: HTMLElement, port: WorkbookPort | null, options:
     );
   }
 
-  const element = h(
+  const referencePanel = h(
     'div',
-    { className: 'sp-pane' },
-    h(
-      'header',
-      { className: 'sp-header' },
-      h('h1', { text: 'Starpoint phasors' }),
-      h('p', { text: 'Phasor and three-phase functions for your cells, in the PHZ namespace.' }),
-    ),
+    { className: 'sp-panel', attrs: { 'data-part': 'reference' } },
     h(
       'div',
       { className: 'sp-searchbar', attrs: { role: 'search' } },
@@ -217,6 +216,78 @@ export function mountPane(root: HTMLElement, port: WorkbookPort | null, options:
     ),
     noPortNote,
     list,
+  );
+
+  // Tabs (WAI-ARIA tabs pattern): the reference first, then each part, mounted when first shown.
+  const parts = options.parts ?? paneParts;
+  const tabs: Array<{ id: string; label: string; panel: HTMLElement; part?: PanePart; handle?: PartHandle | void; mounted: boolean }> = [
+    { id: 'reference', label: 'Functions', panel: referencePanel, mounted: true },
+    ...parts.map((part) => ({
+      id: part.id,
+      label: part.label,
+      part,
+      panel: h('div', { className: 'sp-panel', attrs: { 'data-part': part.id } }),
+      mounted: false,
+    })),
+  ];
+  const tabButtons = tabs.map((t) =>
+    h('button', {
+      className: 'sp-tab',
+      text: t.label,
+      attrs: { type: 'button', role: 'tab', id: `${id}-tab-${t.id}`, 'aria-controls': `${id}-panel-${t.id}`, 'data-tab': t.id },
+    }),
+  );
+  tabs.forEach((t) => {
+    t.panel.id = `${id}-panel-${t.id}`;
+    if (parts.length > 0) {
+      t.panel.setAttribute('role', 'tabpanel');
+      t.panel.setAttribute('aria-labelledby', `${id}-tab-${t.id}`);
+    }
+  });
+  let current = -1;
+  function select(index: number, focus = false): void {
+    if (index === current) return;
+    const before = tabs[current];
+    if (before) before.handle?.hide?.();
+    current = index;
+    tabs.forEach((t, i) => {
+      const on = i === index;
+      t.panel.hidden = !on;
+      tabButtons[i].setAttribute('aria-selected', String(on));
+      tabButtons[i].tabIndex = on ? 0 : -1;
+    });
+    const t = tabs[index];
+    if (!t.mounted && t.part) {
+      t.mounted = true;
+      t.handle = t.part.mount(t.panel, port);
+    }
+    t.handle?.show?.();
+    if (focus) tabButtons[index].focus();
+  }
+  tabButtons.forEach((b, i) => {
+    b.addEventListener('click', () => select(i));
+    b.addEventListener('keydown', (ev) => {
+      const n = tabs.length;
+      const to = ev.key === 'ArrowRight' ? (i + 1) % n : ev.key === 'ArrowLeft' ? (i + n - 1) % n : ev.key === 'Home' ? 0 : ev.key === 'End' ? n - 1 : -1;
+      if (to >= 0) {
+        ev.preventDefault();
+        select(to, true);
+      }
+    });
+  });
+  const tabBar = parts.length > 0 ? h('div', { className: 'sp-tabs', attrs: { role: 'tablist', 'aria-label': 'Starpoint' } }, ...tabButtons) : null;
+
+  const element = h(
+    'div',
+    { className: 'sp-pane' },
+    h(
+      'header',
+      { className: 'sp-header' },
+      h('h1', { text: 'Starpoint phasors' }),
+      h('p', { text: 'Phasor and three-phase functions for your cells, in the PHZ namespace.' }),
+    ),
+    tabBar,
+    ...tabs.map((t) => t.panel),
     h(
       'footer',
       { className: 'sp-footer', attrs: { role: 'note' } },
@@ -235,6 +306,7 @@ export function mountPane(root: HTMLElement, port: WorkbookPort | null, options:
 
   searchInput.addEventListener('input', () => render(searchInput.value));
   render('');
+  select(0);
   root.replaceChildren(element);
 
   return {
@@ -243,7 +315,13 @@ export function mountPane(root: HTMLElement, port: WorkbookPort | null, options:
       searchInput.value = query;
       render(query);
     },
+    showTab(tabId: string) {
+      const index = tabs.findIndex((t) => t.id === tabId);
+      if (index < 0) throw new Error(`no pane tab "${tabId}"; tabs are ${tabs.map((t) => t.id).join(', ')}`);
+      select(index);
+    },
     unmount() {
+      for (const t of tabs) t.handle?.dispose?.();
       root.replaceChildren();
     },
   };
