@@ -13,6 +13,37 @@ export interface ActiveCell {
   readonly formula: string;
 }
 
+/**
+ * A phasor chart that stays linked to cells (the phasor plot's "Insert as chart", also used
+ * by worked sheets). Shared contract between the plot and the worked-sheet builder.
+ */
+export interface PhasorChartRequest {
+  /** Chart title, e.g. `Phase currents`. */
+  readonly title: string;
+  /** The worksheet whose cells hold the phasors. */
+  readonly sheet: string;
+  /** One entry per phasor: its label and the A1 address (no sheet part) of the cell holding it. */
+  readonly phasors: ReadonlyArray<{
+    readonly label: string;
+    readonly cell: string;
+    /** Phasors of one group share one magnitude scale (e.g. `V`, `A`); default: one group. */
+    readonly group?: string;
+  }>;
+  /**
+   * Top-left cell (A1, on `sheet`) of a free area where the chart and its helper cells may go;
+   * left out: the adapter finds free space. Never over cells the user owns.
+   */
+  readonly anchor?: string;
+}
+
+/** What a chart insertion did, for the status line. */
+export interface PhasorChartResult {
+  /** Sheet and range of the helper cells written, e.g. `Sheet1!H2:K8`. */
+  readonly helperRange: string;
+  /** The chart's name in the workbook. */
+  readonly chartName: string;
+}
+
 export interface WorkbookPort {
   /** Shown to the user, e.g. `Excel` or `Preview`. */
   readonly hostName: string;
