@@ -268,9 +268,30 @@ export function parsePhasor(text: string, options?: ParseOptions): Phasor {
   return parseGeneral(text, options);
 }
 
+/** A phasor read from text with the quantity its unit word names (`null` when no unit was given). */
+export interface PhasorWithQuantity {
+  readonly phasor: Phasor;
+  readonly quantity: Quantity | null;
+}
+
+/**
+ * Reads one phasor like `parsePhasor` and also says which quantity its unit word names, so
+ * a caller can show the unit (the phasor plot's legend). Same notations, same messages.
+ *
+ * @example parsePhasorWithQuantity('11 kV∠0') // { phasor: 11000 + j0, quantity: 'voltage' }
+ */
+export function parsePhasorWithQuantity(text: string, options?: ParseOptions): PhasorWithQuantity {
+  if (fastParse(text)) return { phasor: rect(fastResult.re, fastResult.im), quantity: null };
+  const sc = new Scanner(text, commaMode(text));
+  return { phasor: scan(sc, options), quantity: sc.unit };
+}
+
 /** The general scanner: every notation, with messages. Exported for the fast-path agreement test. */
 export function parseGeneral(text: string, options?: ParseOptions): Phasor {
-  const sc = new Scanner(text, commaMode(text));
+  return scan(new Scanner(text, commaMode(text)), options);
+}
+
+function scan(sc: Scanner, options: ParseOptions | undefined): Phasor {
   sc.ws();
   if (sc.done) throw new PhzError(M.empty);
   let re = 0;

@@ -6,3 +6,4 @@ export { parseMessages } from './parse';
 export { readerMessages } from './readers';
 export { valueMessages } from './values';
 export { threePhaseMessages } from './threephase';
+export { plotMessages } from './plot';
