@@ -78,6 +78,8 @@ export class Grid {
   private pasteHandled = false;
   private note = '';
   private readonly selectionListeners = new Set<() => void>();
+  private readonly repaintListeners = new Set<() => void>();
+  private overlay: HTMLDivElement | null = null;
 
   // Parts of the UI.
   private readonly nameBox: HTMLInputElement;
@@ -195,6 +197,32 @@ export class Grid {
 
   focus(): void {
     this.scroller.focus({ preventScroll: true });
+  }
+
+  // ------------------------------------------------- overlay hook (charts over the grid)
+  // The hook src/preview/chart-overlay.ts uses; a reworked grid keeps these three members.
+
+  /** A layer over the cells that scrolls with them; overlays position their elements in it. */
+  get overlayLayer(): HTMLElement {
+    if (!this.overlay) {
+      this.overlay = el(this.doc, 'div', 'pv-overlay');
+      this.canvas.append(this.overlay);
+    }
+    return this.overlay;
+  }
+
+  /** Where a cell of the shown sheet sits in `overlayLayer`, in CSS pixels. */
+  cellBox(pos: CellPos): { left: number; top: number; width: number; height: number } {
+    const row = Math.max(0, Math.min(this.rows - 1, pos.row));
+    const col = Math.max(0, Math.min(this.cols - 1, pos.col));
+    const td = this.cells[row][col];
+    return { left: td.offsetLeft, top: td.offsetTop, width: td.offsetWidth, height: td.offsetHeight };
+  }
+
+  /** Calls `listener` after every repaint (values, column widths, another sheet shown). */
+  onRepaint(listener: () => void): () => void {
+    this.repaintListeners.add(listener);
+    return () => this.repaintListeners.delete(listener);
   }
 
   /** Shows `name` (its tab becomes active). */
@@ -389,6 +417,7 @@ export class Grid {
     this.undoButton.disabled = !this.workbook.canUndo();
     this.redoButton.disabled = !this.workbook.canRedo();
     this.paintSelection();
+    for (const l of this.repaintListeners) l();
   }
 
   private paintCell(td: HTMLTableCellElement, value: DisplayValue, type: CellType, text: string): void {

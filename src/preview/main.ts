@@ -3,11 +3,14 @@
  * the grid, and the task pane docked beside it with a port onto the grid.
  */
 import css from './preview.css?raw';
+import chartCss from './chart-overlay.css?raw';
 import { specs } from '../functions';
 import { mountPane } from '../taskpane/pane';
 import { loadDemo, DEMO_SHEET } from './demo';
 import { PhzEngine } from './engine';
 import { Grid } from './grid';
+import { ChartOverlay } from './chart-overlay';
+import { PreviewPlotPort } from './plot-port';
 import { PreviewPort } from './port';
 import { Workbook } from './workbook';
 
@@ -20,6 +23,7 @@ function adoptStyles(doc: Document, text: string): void {
 
 function start(): void {
   adoptStyles(document, css);
+  adoptStyles(document, chartCss);
   const bookRoot = document.getElementById('pv-book');
   const paneRoot = document.getElementById('pv-pane');
   if (!bookRoot || !paneRoot) throw new Error('preview.html lacks #pv-book or #pv-pane');
@@ -31,7 +35,8 @@ function start(): void {
   const grid = new Grid(bookRoot, workbook);
   grid.showSheet(DEMO_SHEET);
   grid.select({ row: 5, col: 1 });
-  mountPane(paneRoot, new PreviewPort(grid, workbook));
+  const charts = new ChartOverlay(grid, workbook);
+  mountPane(paneRoot, new PreviewPort(grid, workbook, new PreviewPlotPort(grid, workbook, charts)));
   grid.focus();
   const missing = report.skipped.length;
   grid.say(

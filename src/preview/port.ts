@@ -2,10 +2,12 @@
  * The task pane's view of the preview workbook: the same `WorkbookPort` the Excel
  * adapter implements, here against the preview grid and its engine.
  */
-import type { ActiveCell, WorkbookPort } from '../taskpane/port';
+import type { SelectionBlock } from '../taskpane/plot/model';
+import type { ActiveCell, PhasorChartRequest, PhasorChartResult, PlotSupport, SelectionChange, WorkbookPort } from '../taskpane/port';
 import { a1 } from './address';
 import { rawToText } from './grid';
 import type { Grid } from './grid';
+import type { PreviewPlotPort } from './plot-port';
 import type { Workbook } from './workbook';
 
 export class PreviewPort implements WorkbookPort {
@@ -14,7 +16,25 @@ export class PreviewPort implements WorkbookPort {
   constructor(
     private readonly grid: Grid,
     private readonly workbook: Workbook,
+    /** The phasor plot's reading, events and charts (plot-port.ts). */
+    private readonly plot: PreviewPlotPort,
   ) {}
+
+  plotSupport(): PlotSupport {
+    return this.plot.plotSupport();
+  }
+
+  readSelection(maxCells: number): Promise<SelectionBlock> {
+    return this.plot.readSelection(maxCells);
+  }
+
+  watchSelection(listener: (why: SelectionChange) => void): Promise<() => Promise<void>> {
+    return this.plot.watchSelection(listener);
+  }
+
+  insertPhasorChart(request: PhasorChartRequest): Promise<PhasorChartResult> {
+    return this.plot.insertPhasorChart(request);
+  }
 
   async getActiveCell(): Promise<ActiveCell> {
     const pos = this.grid.activeCell;

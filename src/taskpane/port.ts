@@ -4,6 +4,7 @@
  * this interface, so it never touches Office globals and runs unchanged in the preview.
  * Later features extend it (writing worked sheets, reading a selection to plot).
  */
+import type { SelectionBlock } from './plot/model';
 export interface ActiveCell {
   /** Name of the worksheet holding the active cell, e.g. `Sub-board`. */
   readonly sheet: string;
@@ -22,7 +23,10 @@ export interface PhasorChartRequest {
   readonly title: string;
   /** The worksheet whose cells hold the phasors. */
   readonly sheet: string;
-  /** One entry per phasor: its label and the A1 address (no sheet part) of the cell holding it. */
+  /**
+   * One entry per phasor: its label and the A1 address (no sheet part) of the cell holding it,
+   * or of a one-row pair of cells holding its real and imaginary parts (`B5:C5`).
+   */
   readonly phasors: ReadonlyArray<{
     readonly label: string;
     readonly cell: string;
@@ -44,7 +48,42 @@ export interface PhasorChartResult {
   readonly chartName: string;
 }
 
-export interface WorkbookPort {
+/** What a host can do for the phasor plot; each missing capability is said in words. */
+export interface PlotSupport {
+  /** Why the selection cannot be read at all, or null. */
+  readonly read: string | null;
+  /** Why the plot cannot follow recalculation (it still follows the selection), or null. */
+  readonly recalc: string | null;
+  /** Why "Insert as chart" is not available, or null. */
+  readonly chart: string | null;
+}
+
+/** Why the plot should read the selection again. */
+export type SelectionChange = 'selection' | 'values';
+
+/** The phasor plot's needs (issue 10): the selection, its changes, and linked charts. */
+export interface PlotPort {
+  /** Requirement sets checked at runtime, in words for the pane. */
+  plotSupport(): PlotSupport;
+  /**
+   * Reads the used part of the selection: values and where they sit. Over `maxCells` cells
+   * the values are left out (`cellCount` says how many there were).
+   */
+  readSelection(maxCells: number): Promise<SelectionBlock>;
+  /**
+   * Calls `listener` when the selection moves or the workbook recalculates, until the
+   * returned function is called.
+   */
+  watchSelection(listener: (why: SelectionChange) => void): Promise<() => Promise<void>>;
+  /**
+   * Places a chart that stays linked to the cells: helper cells with PHZ formulas (on a new
+   * sheet, or at `request.anchor` when that area is empty) and a chart over them. Never
+   * writes over a cell that holds anything.
+   */
+  insertPhasorChart(request: PhasorChartRequest): Promise<PhasorChartResult>;
+}
+
+export interface WorkbookPort extends PlotPort {
   /** Shown to the user, e.g. `Excel` or `Preview`. */
   readonly hostName: string;
   /** The active cell: the one with focus, also when a range is selected. */

@@ -1,5 +1,6 @@
 /** The WorkbookPort for Excel, on the Office.js workbook API. */
 import type { ActiveCell, WorkbookPort } from '../port';
+import { excelPlotPort } from './excel-plot';
 
 /** Strips the sheet part of an Excel address: `'My sheet'!B2` → `B2`. */
 export function localAddress(address: string): string {
@@ -9,6 +10,7 @@ export function localAddress(address: string): string {
 
 export const excelPort: WorkbookPort = {
   hostName: 'Excel',
+  ...excelPlotPort,
 
   getActiveCell(): Promise<ActiveCell> {
     return Excel.run(async (context) => {
