@@ -6,8 +6,8 @@ import { PhzError } from '../core/errors';
 import { plotMessages as M } from '../core/messages';
 import { checkChartRequest, freshChartName, freshSheetName, helperHeight, HELPER_COLUMNS, planChart } from '../taskpane/plot/chart-plan';
 import type { SelectionBlock, SelectionCell } from '../taskpane/plot/model';
-import type { PhasorChartRequest, PhasorChartResult, PlotPort, PlotSupport, SelectionChange } from '../taskpane/port';
-import { a1, parseA1, rectA1 } from './address';
+import type { PhasorChartRequest, PhasorChartResult, PlotPort, PlotRange, PlotSupport, SelectionChange } from '../taskpane/port';
+import { a1, parseA1, parseRectA1, rectA1 } from './address';
 import type { ChartOverlay } from './chart-overlay';
 import { isDisplayError } from './engine';
 import type { Grid } from './grid';
@@ -24,9 +24,10 @@ export class PreviewPlotPort implements PlotPort {
     return { read: null, recalc: null, chart: null };
   }
 
-  async readSelection(maxCells: number): Promise<SelectionBlock> {
-    const sheet = this.grid.sheetName;
-    const sel = this.grid.selection;
+  async readSelection(maxCells: number, range?: PlotRange): Promise<SelectionBlock> {
+    const sheet = range?.sheet ?? this.grid.sheetName;
+    const sel = range ? parseRectA1(range.address) : this.grid.selection;
+    if (!sel) throw new Error(`"${range?.address}" is not a block of cells`);
     const id = this.workbook.sheetId(sheet);
     const dims = this.workbook.hf.getSheetDimensions(id);
     // The used part: the selection cut to the sheet's filled rows and columns.

@@ -3,7 +3,7 @@
  * adapter implements, here against the preview grid and its engine.
  */
 import type { SelectionBlock } from '../taskpane/plot/model';
-import type { ActiveCell, PhasorChartRequest, PhasorChartResult, PlotSupport, SelectionChange, WorkbookPort } from '../taskpane/port';
+import type { ActiveCell, PhasorChartRequest, PhasorChartResult, PlotRange, PlotSupport, SelectionChange, WorkbookPort } from '../taskpane/port';
 import { a1 } from './address';
 import { rawToText } from './grid';
 import type { Grid } from './grid';
@@ -24,8 +24,8 @@ export class PreviewPort implements WorkbookPort {
     return this.plot.plotSupport();
   }
 
-  readSelection(maxCells: number): Promise<SelectionBlock> {
-    return this.plot.readSelection(maxCells);
+  readSelection(maxCells: number, range?: PlotRange): Promise<SelectionBlock> {
+    return this.plot.readSelection(maxCells, range);
   }
 
   watchSelection(listener: (why: SelectionChange) => void): Promise<() => Promise<void>> {

@@ -58,6 +58,12 @@ export interface PlotSupport {
   readonly chart: string | null;
 }
 
+/** A block of cells by sheet and A1 address (no sheet part), e.g. `Sub-board`, `A21:D22`. */
+export interface PlotRange {
+  readonly sheet: string;
+  readonly address: string;
+}
+
 /** Why the plot should read the selection again. */
 export type SelectionChange = 'selection' | 'values';
 
@@ -66,10 +72,11 @@ export interface PlotPort {
   /** Requirement sets checked at runtime, in words for the pane. */
   plotSupport(): PlotSupport;
   /**
-   * Reads the used part of the selection: values and where they sit. Over `maxCells` cells
-   * the values are left out (`cellCount` says how many there were).
+   * Reads the used part of the selection (or of `range`, a block the plot keeps while the
+   * person works elsewhere): values and where they sit. Over `maxCells` cells the values are
+   * left out (`cellCount` says how many there were).
    */
-  readSelection(maxCells: number): Promise<SelectionBlock>;
+  readSelection(maxCells: number, range?: PlotRange): Promise<SelectionBlock>;
   /**
    * Calls `listener` when the selection moves or the workbook recalculates, until the
    * returned function is called.

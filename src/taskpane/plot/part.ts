@@ -9,7 +9,7 @@ import { formatPolar } from '../../core/format';
 import { plotMessages as M } from '../../core/messages';
 import { rect } from '../../core/phasor';
 import type { PanePart, PartHandle } from '../parts';
-import type { PhasorChartRequest, WorkbookPort } from '../port';
+import type { PhasorChartRequest, PlotRange, WorkbookPort } from '../port';
 import { CHART_MAX_PHASORS } from './chart-plan';
 import { download, fileStem, pngFile, svgFile } from './export';
 import { layoutPlot, type Drawing, type PlotView } from './geometry';
@@ -92,7 +92,9 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
     h('option', { attrs: { value: 'iec60445' }, text: 'IEC 60445 conductor colours' }),
   );
   const button = (text: string, label?: string) => h('button', { className: 'sp-plot-button', text, attrs: { type: 'button', ...(label ? { 'aria-label': label } : {}) } });
-  const refreshButton = button('Refresh', 'Read the selection again');
+  const follow = h('input', { attrs: { type: 'checkbox', id: `${id}-follow` } });
+  follow.checked = true;
+  const refreshButton = button('Refresh', 'Read the cells again');
   const svgButton = button('Save SVG', 'Save the plot as an SVG file');
   const pngButton = button('Save PNG', 'Save the plot as a PNG picture');
   const chartButton = button('Insert as chart', 'Insert a chart linked to these cells into the workbook');
@@ -124,6 +126,7 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   );
   table.hidden = true;
   const actionStatus = h('p', { className: 'sp-plot-status', attrs: { role: 'status', 'aria-live': 'polite' } });
+  const tipStatus = h('p', { className: 'sp-plot-status sp-plot-tip', attrs: { 'aria-live': 'polite' } });
 
   const viewGroup = h(
     'fieldset',
@@ -142,10 +145,17 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
         viewGroup,
         h('span', { className: 'sp-plot-field' }, h('label', { attrs: { for: scaleSelect.id }, text: 'Scales' }), scaleSelect),
         h('span', { className: 'sp-plot-field' }, h('label', { attrs: { for: paletteSelect.id }, text: 'Colours' }), paletteSelect),
+        h(
+          'span',
+          { className: 'sp-plot-field' },
+          follow,
+          h('label', { attrs: { for: follow.id, title: 'Untick to keep plotting these cells while you select and edit others' }, text: 'Follow the selection' }),
+        ),
       ),
       h('div', { className: 'sp-plot-actions' }, refreshButton, svgButton, pngButton, chartButton),
       status,
       figure,
+      tipStatus,
       unreadableBox,
       h('div', { className: 'sp-plot-table-wrap' }, table),
       actionStatus,
@@ -163,6 +173,8 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   let busy = false;
   let again = false;
   let visible = false;
+  /** The block kept while "Follow the selection" is off. */
+  let pinned: PlotRange | undefined;
 
   const view = (): PlotView => (viewRadios.find((r) => r.input.checked)?.v ?? 'origin');
   const palette = () => paletteSelect.value as PaletteName;
@@ -181,6 +193,7 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
     svgText = '';
     table.hidden = true;
     tableKey = '';
+    tipStatus.textContent = '';
     setExports(false);
   }
 
@@ -233,25 +246,24 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
 
   /** Lays out and draws `data` with the current options; the DOM changes only when the picture does. */
   function draw(): void {
-    if (!data) return;
-    const chainIdx = chain.map((c) => data!.phasors.findIndex((p) => p.cell === c)).filter((i) => i >= 0);
-    drawing = layoutPlot(data, { palette: palette(), view: view(), chain: chainIdx, idPrefix: id });
+    const d = data;
+    if (!d) return;
+    const chainIdx = chain.map((c) => d.phasors.findIndex((p) => p.cell === c)).filter((i) => i >= 0);
+    drawing = layoutPlot(d, { palette: palette(), view: view(), chain: chainIdx, idPrefix: id });
     const svg = renderSvg(drawing);
     if (svg !== svgText) {
       svgText = svg;
       figure.innerHTML = svg;
     }
-    renderTable(data);
-    if (view() === 'tipToTail') {
-      const groups = new Set(chainIdx.map((i) => data!.phasors[i].group));
-      actionStatus.textContent = chainIdx.length < 2 ? M.tipToTailNone : groups.size > 1 ? M.tipToTailMixed : '';
-    }
+    renderTable(d);
+    const groups = new Set(chainIdx.map((i) => d.phasors[i].group));
+    tipStatus.textContent = view() !== 'tipToTail' ? '' : chainIdx.length < 2 ? M.tipToTailNone : groups.size > 1 ? M.tipToTailMixed : '';
   }
 
   async function readAndDraw(): Promise<void> {
     let block;
     try {
-      block = await port!.readSelection(PLOT_LIMITS.maxCells);
+      block = await port!.readSelection(PLOT_LIMITS.maxCells, pinned);
     } catch (e) {
       clearPlot(M.readFailed(port!.hostName, message(e)));
       return;
@@ -295,6 +307,11 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   paletteSelect.addEventListener('change', draw);
   scaleSelect.addEventListener('change', () => void refresh());
   refreshButton.addEventListener('click', () => void refresh());
+  follow.addEventListener('change', () => {
+    pinned = follow.checked || !data ? undefined : { sheet: data.sheet, address: data.source.slice(data.sheet.length + 1) };
+    if (!follow.checked && !pinned) follow.checked = true;
+    void refresh();
+  });
   svgButton.addEventListener('click', () => {
     if (!data || !svgText) return;
     download(doc, svgFile(svgText), `${fileStem(data.source)}.svg`);
@@ -340,7 +357,10 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
       return;
     }
     try {
-      const off = await port!.watchSelection(() => void refresh());
+      // With the block kept, a selection change alone does not move the plot.
+      const off = await port!.watchSelection((why) => {
+        if (why === 'values' || !pinned) void refresh();
+      });
       if (!visible) {
         await off();
         return;

@@ -14,7 +14,7 @@ import { plotMessages as M } from '../../core/messages';
 import { columnLetters, parseA1 } from '../plot/address';
 import { checkChartRequest, freshChartName, freshSheetName, helperHeight, HELPER_COLUMNS, planChart } from '../plot/chart-plan';
 import type { SelectionBlock, SelectionCell } from '../plot/model';
-import type { PhasorChartRequest, PhasorChartResult, PlotPort, PlotSupport, SelectionChange } from '../port';
+import type { PhasorChartRequest, PhasorChartResult, PlotPort, PlotRange, PlotSupport, SelectionChange } from '../port';
 
 /** Strips the sheet part of an Excel address: `'My sheet'!B2` → `B2`. */
 function local(address: string): string {
@@ -51,9 +51,9 @@ export const excelPlotPort: PlotPort = {
     };
   },
 
-  readSelection(maxCells: number): Promise<SelectionBlock> {
+  readSelection(maxCells: number, range?: PlotRange): Promise<SelectionBlock> {
     return Excel.run(async (context) => {
-      const selected = context.workbook.getSelectedRange();
+      const selected = range ? context.workbook.worksheets.getItem(range.sheet).getRange(range.address) : context.workbook.getSelectedRange();
       selected.load('address,worksheet/name');
       const used = selected.getUsedRangeOrNullObject(true);
       used.load('address,rowIndex,columnIndex,cellCount');
