@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { parsePhasor } from '../../src/core/parse';
+import { parsePhasor, parsePhasorWithQuantity } from '../../src/core/parse';
 import { expectPhasorClose, expectPhzError } from '../helpers';
 
 const c30 = Math.cos(Math.PI / 6);
@@ -152,5 +152,28 @@ describe('angles at multiples of 15° are exact', () => {
       expect(Math.abs(z.re - Math.cos(a))).toBeLessThan(4e-15);
       expect(Math.abs(z.im - Math.sin(a))).toBeLessThan(4e-15);
     }
+  });
+});
+
+describe('parsePhasorWithQuantity says which quantity a unit word names', () => {
+  it.each([
+    ['11 kV∠0', 'voltage', pd(11000, 0)],
+    ['7+j5 Ω', 'impedance', r(7, 5)],
+    ['250 mΩ', 'impedance', r(0.25, 0)],
+    ['12 A∠-30', 'current', pd(12, -30)],
+    ['2.3 kVA∠36.87', 'power', pd(2300, 36.87)],
+    ['230∠-120', null, pd(230, -120)],
+    ['7+j5', null, r(7, 5)],
+  ] as const)('%s → %s', (text, quantity, value) => {
+    const got = parsePhasorWithQuantity(text);
+    expect(got.quantity).toBe(quantity);
+    // same value as the one parser gives (and as the notation stands for)
+    expectPhasorClose(got.phasor, value);
+    expectPhasorClose(got.phasor, parsePhasor(text), 0);
+  });
+
+  it('gives the parser its own message for text it cannot read', () => {
+    const err = expectPhzError(() => parsePhasorWithQuantity('12 furlongs'));
+    expect(err.message).toMatch(/^cannot read "12 furlongs" as a phasor/);
   });
 });

@@ -271,8 +271,10 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
     const source = `${block.sheet}!${block.selected}`;
     if (block.cellCount > PLOT_LIMITS.maxCells) return clearPlot(M.tooManyCells(source, block.cellCount, PLOT_LIMITS.maxCells));
     const next = readSelection(block, scaleSelect.value as ScaleMode);
-    renderUnreadable(next);
-    if (next.phasors.length === 0) return clearPlot(block.cellCount === 0 ? M.pick : M.noPhasors(source, next.unreadable.length));
+    // A block of labels and notes is not a list of mistakes: cells are listed when some
+    // phasors were read, or when the one cell selected cannot be.
+    renderUnreadable(next.phasors.length > 0 || block.cellCount === 1 ? next : { ...next, unreadable: [] });
+    if (next.phasors.length === 0) return clearPlot(block.cellCount === 0 ? M.pick : M.noPhasors(source, block.cellCount === 1 ? next.unreadable.length : 0));
     if (next.phasors.length > PLOT_LIMITS.maxPhasors) return clearPlot(M.tooManyPhasors(source, next.phasors.length, PLOT_LIMITS.maxPhasors));
     // A new block of cells starts with its first group ticked for tip to tail.
     const key = `${next.source}|${next.phasors.map((p) => p.cell).join(',')}`;

@@ -21,7 +21,7 @@ function block(values: SelectionCell[][], top = 0, left = 0, sheet = 'Sheet1'): 
 
 /** mathjs's phasor of magnitude∠degrees (independent of our parser). */
 function mjPolar(m: number, deg: number): { re: number; im: number } {
-  const z = math.Complex.fromPolar(m, (deg * Math.PI) / 180);
+  const z = math.complex({ r: m, phi: (deg * Math.PI) / 180 });
   return { re: z.re, im: z.im };
 }
 
@@ -35,7 +35,7 @@ describe('readSelection: shapes', () => {
     expectPhasorClose(d.phasors[2], math.complex('7-5i'));
     expectPhasorClose(d.phasors[3], mjPolar(230, 30));
     expectPhasorClose(d.phasors[4], { re: 12.5, im: 0 });
-    expectPhasorClose(d.phasors[5], math.Complex.fromPolar(1, 0.5));
+    expectPhasorClose(d.phasors[5], math.complex({ r: 1, phi: 0.5 }));
     expectPhasorClose(d.phasors[6], math.complex('7.5+2.25i'));
     expect(d.unreadable).toEqual([]);
   });
