@@ -11,6 +11,7 @@ import * as math from 'mathjs';
 import { execFileSync } from 'node:child_process';
 import { functions } from '../src/functions';
 import { benchStarload } from './starload.bench';
+import { benchPlot1000, benchReplot50 } from './plot.bench';
 
 let sink = 0;
 
@@ -60,6 +61,8 @@ const CASES: Record<string, () => Promise<number> | number> = {
     return msOnce(() => functions.SUM([cells]));
   },
   starload: async () => (await benchStarload()).nsPerCall,
+  plot1000: benchPlot1000,
+  replot50: benchReplot50,
 };
 
 function measure(name: string): number {
@@ -97,6 +100,10 @@ async function main(): Promise<void> {
   row('PHZ.ADD over a 100,000-cell column of text', `${sumMs.toFixed(1)} ms`, sumMs <= 30 ? 'met (≤ 30 ms)' : 'NOT MET (≤ 30 ms)');
   const star = measure('starload');
   row('PHZ.STARLOAD (3-wire, line Z; parse, solve, format 4×3)', `${(star / 1000).toFixed(2)} µs`, star <= 5000 ? 'met (≤ 5 µs)' : 'NOT MET (≤ 5 µs)');
+  const plot = measure('plot1000');
+  row('Phasor plot: geometry + SVG text, 1,000 phasors', `${plot.toFixed(2)} ms`, plot <= 20 ? 'met (≤ 20 ms)' : 'NOT MET (≤ 20 ms)');
+  const replot = measure('replot50');
+  row('Phasor plot: re-plot of 50 phasors (read, lay out, SVG)', `${replot.toFixed(2)} ms`, replot <= 5 ? 'met (≤ 5 ms)' : 'NOT MET (≤ 5 ms)');
 }
 
 void main();

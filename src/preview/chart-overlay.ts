@@ -111,7 +111,8 @@ export class ChartOverlay {
         const head = doc.createElement('div');
         head.className = 'pv-chart-head';
         const title = doc.createElement('span');
-        title.textContent = `${chart.name} · linked to ${chart.plan.helperSheet}!${chart.plan.range}`;
+        title.textContent = `${chart.plan.title} · ${chart.name}`;
+        title.title = `Linked to the plotted cells through the helper cells ${chart.plan.helperSheet}!${chart.plan.range}`;
         const close = doc.createElement('button');
         close.type = 'button';
         close.className = 'pv-chart-close';

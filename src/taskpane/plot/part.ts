@@ -112,14 +112,16 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   const table = h(
     'table',
     { className: 'sp-plot-table' },
-    h('caption', { text: 'Phasors plotted (tick “Sum” to add them tip to tail)' }),
+    h('caption', { text: 'Phasors plotted' }),
     h(
       'thead',
       {},
       h(
         'tr',
         {},
-        ...['Sum', 'Phasor', 'Group', 'Magnitude', 'Angle', 'Cell'].map((t) => h('th', { text: t, attrs: { scope: 'col' } })),
+        ...['Sum', 'Phasor', 'Group', 'Magnitude', 'Angle', 'Cell'].map((t) =>
+          h('th', { text: t, attrs: { scope: 'col', ...(t === 'Sum' ? { title: 'Tick phasors to add them tip to tail' } : {}) } }),
+        ),
       ),
     ),
     tbody,
