@@ -74,7 +74,8 @@ export const readerMessages = {
   nonFiniteResult(fn: string): string {
     return `PHZ.${fn} gave a result that is not a finite number (a division by zero or an overflow): check the inputs for zero impedances, open circuits or zero voltages`;
   },
-  internal(fn: string, detail: string): string {
-    return `PHZ.${fn} could not compute this (${detail}); check the inputs, and report it if they are valid`;
+  /** Something that is not a PhzError escaped: the cell never shows its raw text (the console gets it). */
+  internal(fn: string): string {
+    return `PHZ.${fn} could not compute this (internal error): check the inputs, and report the formula if they are valid`;
   },
 };
