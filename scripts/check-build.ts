@@ -1,11 +1,20 @@
 /**
  * After `npm run build`: the built dist/functions.json lists every registry entry, in
- * order, with matrix phasor parameters and matrix results, and the production add-in
- * bundle holds no HyperFormula. Run by .ci/run; exits non-zero on any mismatch.
+ * order, with matrix phasor parameters and matrix results; the production add-in
+ * bundle holds no HyperFormula; taskpane.html loads office.js from where its build mode
+ * says, with the matching Content-Security-Policy. Run by .ci/run; exits non-zero on any mismatch.
  */
-import { readFileSync, readdirSync } from 'node:fs';
+import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { createRequire } from 'node:module';
 import { specs } from '../src/functions';
+
+// pane-page.js is CommonJS (webpack.config.js requires it too)
+const { OFFICE_JS_CDN, OFFICE_JS_LOCAL, paneCsp } = createRequire(__filename)('./pane-page.js') as {
+  OFFICE_JS_CDN: string;
+  OFFICE_JS_LOCAL: string;
+  paneCsp(production: boolean): string;
+};
 
 interface MetaParam {
   name: string;
@@ -41,8 +50,23 @@ for (const s of specs) {
 for (const file of readdirSync(dist).filter((f) => /^taskpane.*\.js$/.test(f))) {
   if (/HyperFormula|hyperformula/.test(readFileSync(join(dist, file), 'utf8'))) problems.push(`${file} contains HyperFormula`);
 }
+// The add-in's page: office.js from the CDN with a policy allowing exactly that origin and
+// no local copy (production), or the local copy with a policy of this origin only (development).
+const pane = readFileSync(join(dist, 'taskpane.html'), 'utf8');
+const officeSrc = /<script\s+src=["']?([^"'\s>]*office\.js)["'\s>]/i.exec(pane)?.[1];
+const policy = /<meta\s+http-equiv=["']?Content-Security-Policy["']?\s+content="([^"]+)"/i.exec(pane)?.[1];
+const production = officeSrc === OFFICE_JS_CDN;
+const localCopy = existsSync(join(dist, 'office-js', 'office.js'));
+if (officeSrc !== OFFICE_JS_CDN && officeSrc !== OFFICE_JS_LOCAL) problems.push(`taskpane.html loads office.js from ${officeSrc ?? 'nowhere'}`);
+if (policy !== paneCsp(production)) problems.push(`taskpane.html's Content-Security-Policy is "${policy}", not "${paneCsp(production)}"`);
+if (production && localCopy) problems.push('a production build loads office.js from the CDN but still copies the local office-js folder');
+if (!production && !localCopy) problems.push('a development build loads office-js/office.js but dist/office-js/office.js is missing');
+const mode = production ? 'production: office.js from the CDN, policy allows that origin only' : 'development: local office.js, policy of this origin only';
+
 if (problems.length > 0) {
   console.error(`dist check failed:\n- ${problems.join('\n- ')}`);
   process.exit(1);
 }
-console.log(`dist check: functions.json lists all ${names.length} registry functions with matrix parameters; no HyperFormula in the add-in bundle`);
+console.log(
+  `dist check: functions.json lists all ${names.length} registry functions with matrix parameters; no HyperFormula in the add-in bundle; ${mode}`,
+);
