@@ -139,12 +139,15 @@ export function isPairBlock(m: unknown[][]): boolean {
  * are passed over; otherwise a blank is an error naming the cell.
  */
 export function readPhasors(arg: unknown, name: string, options: PhasorReadOptions = NO_OPTIONS): Phasor[] {
+  // the most common call: one text cell, read before any shape or data-type handling
+  if (Array.isArray(arg) && arg.length === 1) {
+    const row: unknown = arg[0];
+    if (Array.isArray(row) && row.length === 1 && typeof row[0] === 'string' && row[0] !== '') {
+      return [cellPhasor(row[0], name, arg as unknown[][], 0, 0, options.expect)];
+    }
+  }
   const m = asMatrix(arg);
   const skip = options.blanks === 'skip';
-  // the most common call: one text cell
-  if (m.length === 1 && m[0].length === 1 && typeof m[0][0] === 'string' && m[0][0] !== '') {
-    return [cellPhasor(m[0][0], name, m, 0, 0, options.expect)];
-  }
   const out: Phasor[] = [];
   if (isPairBlock(m)) {
     for (let r = 0; r < m.length; r++) {
