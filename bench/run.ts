@@ -1,7 +1,7 @@
 /**
  * `npm run bench`: speed figures, printed (not asserted). Targets (issues 2 and 3):
  * DIV on two text phasors ≤ 0.5× complex.js's own parse + divide + toString;
- * SUM over a 100,000-cell column of text phasors ≤ 30 ms; STARLOAD ≤ 5 µs per call.
+ * ADD over a 100,000-cell column of text phasors ≤ 30 ms; STARLOAD ≤ 5 µs per call.
  *
  * Every case runs in a fresh node process (so one library's JIT state cannot help or
  * hurt another's), five times; the best batch of the best process is reported.
@@ -49,7 +49,7 @@ function sumColumn(): string[][] {
   return cells;
 }
 
-/** Each case returns its figure: ns per call, or ms for SUM. */
+/** Each case returns its figure: ns per call, or ms for ADD. */
 const CASES: Record<string, () => Promise<number> | number> = {
   divPolar: () => nsPerCall(() => functions.DIV(A, B)),
   divRect: () => nsPerCall(() => functions.DIV(AR, B)),
@@ -57,7 +57,7 @@ const CASES: Record<string, () => Promise<number> | number> = {
   mathjs: () => nsPerCall(() => math.format(math.divide(math.complex('-115-199.186i'), math.complex('8+6i'))), 5000),
   sum: () => {
     const cells = sumColumn();
-    return msOnce(() => functions.SUM([cells]));
+    return msOnce(() => functions.ADD([cells]));
   },
   starload: async () => (await benchStarload()).nsPerCall,
 };
