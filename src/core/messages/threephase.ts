@@ -96,6 +96,9 @@ export const threePhaseMessages = {
   harmonicDuplicate(order: number): string {
     return `harmonic order ${order} appears in more than one row: give each order once`;
   },
+  zeroVoltageAngle(name: string, phase: number): string {
+    return `${name}, phase ${phase} is 0 V: the harmonic currents of phase ${phase} are referred to its voltage angle, which 0 V does not have; give the supply phase voltages, or leave the argument out for a balanced supply at 0°, −120°, +120°`;
+  },
   negativePercent(name: string, value: number): string {
     return `${name} is ${value} %: give a percentage of 0 or more`;
   },

@@ -369,10 +369,11 @@ export function NEUTRAL120(i1: any[][], i2?: any[][], i3?: any[][]): any[][] {
  * @customfunction NEUTRALRMS
  * @param {any[][]} currents Fundamental phase currents I1, I2, I3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} harmonics Rows of [order, percent] or [order, p1, p2, p3]; order a whole number ≥ 2, percent ≥ 0.
+ * @param {any[][]} [phase_voltages] Supply phase voltages V1, V2, V3: the harmonics follow their angles (default a balanced set at 0°, −120°, +120°).
  * @returns {any[][]} A number: the rms neutral current (same unit as the currents).
  */
-export function NEUTRALRMS(currents: any[][], harmonics: any[][]): any[][] {
-  return invoke('NEUTRALRMS', [currents, harmonics]);
+export function NEUTRALRMS(currents: any[][], harmonics: any[][], phase_voltages?: any[][]): any[][] {
+  return invoke('NEUTRALRMS', [currents, harmonics, phase_voltages]);
 }
 
 /**
