@@ -24,8 +24,14 @@ export const threePhaseMessages = {
   negativeMagnitude(name: string, value: number): string {
     return `${name} is ${value}: give a magnitude of 0 or more (use angle to turn the set)`;
   },
-  kvl(name: string, residual: string): string {
-    return `${name} does not sum to zero (V12 + V23 + V31 = ${residual}), so it cannot be a set of line-to-line voltages: check the angles (a positive-sequence set is V∠θ, V∠θ−120°, V∠θ+120°)`;
+  kvl(name: string, residual: string, percent: string): string {
+    return `${name} does not close: V12 + V23 + V31 = ${residual}, ${percent} % of their mean magnitude (up to 1 % is removed as rounding). Check the order V12, V23, V31, the angles (V∠θ, V∠θ−120°, V∠θ+120°) and that all are line-to-line`;
+  },
+  lineSetNotTriangle(name: string, big: string, others: string, value: number, sum: number): string {
+    return `${name}: ${big} = ${value} exceeds ${others} = ${sum}, so the three cannot close a triangle and are not the line voltages of one supply: check the readings (all three line-to-line, in one unit)`;
+  },
+  lineSetZero(name: string, which: string): string {
+    return `${name}: ${which} is 0, which leaves the angles of the set undefined: give the three measured line-to-line magnitudes, all above 0`;
   },
   deltaResonant:
     'the three delta impedances add up to 0 Ω (the branches resonate around the delta), so the star equivalent is unbounded: check the reactances',

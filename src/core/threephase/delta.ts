@@ -15,7 +15,7 @@
 import { PhzError } from '../errors';
 import { ONE, ZERO, magnitude, snapToZero, type Phasor } from '../phasor';
 import { threePhaseMessages as M } from '../messages/threephase';
-import { checkLineSet, starOfClosedLineSet } from './sets';
+import { closeLineSet, starOfClosedLineSet } from './sets';
 import { solveLinear } from './linear';
 import { isOpen, isZeroish, type Impedance, type Triple } from './types';
 
@@ -53,8 +53,8 @@ const ENDS: ReadonlyArray<readonly [number, number]> = [
 
 /** Solves a delta load; throws PhzError for supply short circuits, all-open loads and resonance. */
 export function solveDelta(input: DeltaInput): DeltaSolution {
-  const { lineVoltages: vLine, loads } = input;
-  checkLineSet(vLine, 'line_voltages');
+  const { loads } = input;
+  const vLine = closeLineSet(input.lineVoltages, 'line_voltages');
   if (isOpen(loads[0]) && isOpen(loads[1]) && isOpen(loads[2])) throw new PhzError(M.allOpen('branch impedances'));
   const lines = input.lines;
   const noLines = lines === null || lines.every((z) => z.re === 0 && z.im === 0);

@@ -229,6 +229,18 @@ export function STARVOLTS(line_set: any[][], digits?: any): any[][] {
 }
 
 /**
+ * A closed set of line-to-line voltages V12, V23, V31 from their three measured magnitudes (law of cosines).
+ * @customfunction LINESET
+ * @param {any[][]} magnitudes Measured magnitudes |V12|, |V23|, |V31|: three numbers above 0, in a row or a column.
+ * @param {any} [angle] Angle of V12 in degrees (default 30).
+ * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
+ * @returns {any[][]} A 3×1 column of polar text: V12, V23, V31.
+ */
+export function LINESET(magnitudes: any[][], angle?: any, digits?: any): any[][] {
+  return invoke('LINESET', [magnitudes, angle, digits]);
+}
+
+/**
  * Star impedances Z1, Z2, Z3 equivalent to delta branches Z12, Z23, Z31 (Kennelly).
  * @customfunction DELTATOSTAR
  * @param {any[][]} z12 Branch Z12 (between lines 1 and 2), or a range of three: Z12, Z23, Z31. "open" for a missing branch.
