@@ -52,7 +52,7 @@ describe('neutralRms', () => {
     expectClose(r.byOrder[0][1], 3 * 0.4 * 20, 1e-12);
     // fundamental: the phasor sum, computed here with mathjs (an independent complex library)
     const fund = math.abs(
-      math.add(math.add(math.complex({ abs: 20, arg: (-18.19 * Math.PI) / 180 }), math.complex({ abs: 20, arg: (-120 * Math.PI) / 180 })), math.complex({ abs: 20, arg: (83.13 * Math.PI) / 180 })) as math.Complex,
+      math.add(math.add(math.complex({ r: 20, phi: (-18.19 * Math.PI) / 180 }), math.complex({ r: 20, phi: (-120 * Math.PI) / 180 })), math.complex({ r: 20, phi: (83.13 * Math.PI) / 180 })) as math.Complex,
     ) as unknown as number;
     expectClose(r.rms, Math.hypot(fund, 24), 1e-12);
     expectClose(r.rms, 26.8243, 1e-5); // √(11.98² + 24²) ≈ 26.82 A, the review's figure
@@ -88,7 +88,7 @@ describe('neutralRms', () => {
     expectClose(a.rms, b.rms, 1e-14);
     // third harmonics at 15°, −354°, 363°: 6 A each, computed by hand with mathjs
     const third = math.abs(
-      math.add(math.add(math.complex({ abs: 6, arg: (15 * Math.PI) / 180 }), math.complex({ abs: 6, arg: (-354 * Math.PI) / 180 })), math.complex({ abs: 6, arg: (363 * Math.PI) / 180 })) as math.Complex,
+      math.add(math.add(math.complex({ r: 6, phi: (15 * Math.PI) / 180 }), math.complex({ r: 6, phi: (-354 * Math.PI) / 180 })), math.complex({ r: 6, phi: (363 * Math.PI) / 180 })) as math.Complex,
     ) as unknown as number;
     expectClose(a.byOrder[0][1], third, 1e-12);
   });

@@ -140,7 +140,7 @@ describe('lineSetFromMagnitudes: a closed line-voltage set from three measured m
         const z = v.map(mjs);
         const gamma = math.acos(math.divide(math.subtract(math.add(math.square(a), math.square(b)), math.square(c)), 2 * a * b) as number) as number;
         const turn = math.subtract(math.pi, gamma) as number; // V23 lags V12 by the exterior angle
-        const want23 = math.multiply(math.divide(z[0], a), math.complex({ abs: b, arg: -turn })) as math.Complex;
+        const want23 = math.multiply(math.divide(z[0], a), math.complex({ r: b, phi: -turn })) as math.Complex;
         expectPhasorClose(v[1], want23, 1e-9);
         expect(math.abs(math.add(math.add(z[0], z[1]), z[2]) as math.Complex) as unknown as number).toBeLessThanOrEqual(1e-12 * (a + b + c));
         expectClose(magnitude(v[0]), a, 1e-14);

@@ -93,7 +93,7 @@ describe('PHZ.STARVOLTS', () => {
     // V1 = (V12 − V31)/3 and so on, computed with mathjs from the readings as typed
     const v = texts.map((t) => {
       const [m, a] = t.split('∠').map(Number);
-      return math.complex({ abs: m, arg: (a * Math.PI) / 180 });
+      return math.complex({ r: m, phi: (a * Math.PI) / 180 });
     });
     const want = [0, 1, 2].map((k) => math.divide(math.subtract(v[k], v[(k + 2) % 3]), 3) as math.Complex);
     for (let k = 0; k < 3; k++) expectPhasorClose(r[k], want[k], 1e-13);

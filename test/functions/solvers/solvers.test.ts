@@ -50,6 +50,13 @@ describe('PHZ.STARLOAD', () => {
     }
     expectPhasorClose(ph(t1[3][1]), ref.shift, 1e-12);
   });
+  it('stiff network (issue 8 §6): 1e-9 Ω beside two 1e9 Ω phases, open neutral → I1 = 1.9053e-5∠0° A and no neutral current (by hand: I1 = −(I2 + I3) = 3·6351 V/1e9 Ω)', () => {
+    const t = call('STARLOAD', call('BALANCED', 6351), col('1e-9', '1e9', '1e9'), 'open');
+    expect(t[0][0]).toBe('0.000019053∠0°');
+    expect(t[3][0]).toBe('0');
+    const t15 = call('STARLOAD', call('BALANCED', 6351), col('1e-9', '1e9', '1e9'), 'open', null, null, 15);
+    expectPhasorClose(ph(t15[0][0]), rect((3 * 6351) / 1e9), 1e-12);
+  });
   it('labels TRUE adds a header row and a label column (5×4)', () => {
     const t = call('STARLOAD', E, col(23, 46, 23), null, null, true);
     expect(t.length).toBe(5);
@@ -129,7 +136,7 @@ describe('PHZ.DELTALOAD', () => {
     // reference: the exact line voltages of the same phases, V12 = V1 − V2 … (mathjs), each branch I = V/Z
     const v = ['231∠0', '226∠-121', '229∠119'].map((s) => {
       const [m, a] = s.split('∠').map(Number);
-      return math.complex({ abs: m, arg: (a * Math.PI) / 180 });
+      return math.complex({ r: m, phi: (a * Math.PI) / 180 });
     });
     const zs = [math.complex(30, 12), math.complex(45, -20), math.complex(25, 5)];
     for (let k = 0; k < 3; k++) {
@@ -142,6 +149,13 @@ describe('PHZ.DELTALOAD', () => {
     // with line impedances too
     const tl = call('DELTALOAD', rounded, z, '0.2+j0.1', null, 15);
     expect(tl.length).toBe(3);
+  });
+  it('stiff network (issue 8 §6): a balanced 1e7 Ω delta behind 1e-6 Ω lines draws three equal line currents, √3·V/Z (common practice)', () => {
+    const t = call('DELTALOAD', call('LINEVOLTS', call('BALANCED', 230)), '1e7', '1e-6', null, 15);
+    const m = t.map((row) => magnitude(ph(row[0])));
+    expect(Math.abs(m[1] / m[0] - 1)).toBeLessThanOrEqual(1e-12);
+    expect(Math.abs(m[2] / m[0] - 1)).toBeLessThanOrEqual(1e-12);
+    expectClose(m[0], (Math.sqrt(3) * 398.372) / 1e7, 1e-12);
   });
   it('labels TRUE adds a header and a label column (4×5); an "open" branch', () => {
     const t = call('DELTALOAD', V, col(40, 'open', 40), null, true);
