@@ -80,8 +80,10 @@ export const threePhaseMessages = {
   networkSingular:
     'the delta load and line impedances resonate (the node equations are singular), so no finite solution exists: check the reactances',
   neutralWord(got: string): string {
-    return `neutral is "${got}": leave it blank or 0 for a solid neutral, give an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral`;
+    return `neutral is "${got}": give 0 (or leave the argument out) for a solid neutral, an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral`;
   },
+  neutralBlank:
+    'neutral refers to a blank cell: give 0 for a solid neutral, an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral (only a left-out argument means a solid neutral)',
   openNotAllowed(where: string): string {
     return `${where} is "open": only load impedances may be open here; give an impedance`;
   },

@@ -330,7 +330,7 @@ export function POWERFACTOR(power: any[][]): any[][] {
  * @customfunction STARLOAD
  * @param {any[][]} phase_voltages Source phase voltages E1, E2, E3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} impedances Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.
- * @param {any[][]} [neutral] Blank or 0 = solid neutral (default); an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral.
+ * @param {any[][]} [neutral] Left out or 0 = solid neutral; an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral. Not a blank cell.
  * @param {any[][]} [line] Line impedance: one for every line, or three (default none).
  * @param {any} [labels] TRUE adds a header row and a label column (default FALSE).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).

@@ -72,6 +72,17 @@ describe('PHZ.STARLOAD', () => {
     expectMessage(() => call('STARLOAD', col('230∠0', '', '230∠120'), col(1, 2, 3)), /phase_voltages, row 2 is blank/);
     expectMessage(() => call('STARLOAD', E, col(1, null, 3)), /impedances, row 2 is blank/);
   });
+  it('neutral: only a left-out argument means a solid neutral; a blank cell is an error asking for 0, an impedance or "open"', () => {
+    const solid = call('STARLOAD', E, col(23, 46, 23), 0);
+    // the host passes null for a left-out argument (undefined when the call is shorter)
+    expect(call('STARLOAD', E, col(23, 46, 23), null)).toEqual(solid);
+    expect(call('STARLOAD', E, col(23, 46, 23))).toEqual(solid);
+    expect(call('STARLOAD', E, col(23, 46, 23), 'solid')).toEqual(solid);
+    // a referenced blank cell arrives as [[null]] or [[""]]; whitespace-only text is blank too
+    for (const blank of [[[null]], [['']], [['  ']], [[null], [null]]]) {
+      expectMessage(() => call('STARLOAD', E, col(23, 46, 23), blank), /^neutral refers to a blank cell: give 0 for a solid neutral, an impedance .* or "open" for no neutral/);
+    }
+  });
   it('wrong type: an unknown neutral word, a current where an impedance belongs, non-boolean labels', () => {
     expectMessage(() => call('STARLOAD', E, col(1, 2, 3), 'floating'), /neutral is "floating"/);
     expectMessage(() => call('STARLOAD', E, col(1, '2 A', 3)), /impedances, row 2/);
