@@ -44,8 +44,8 @@ export const BALANCED_ANGLES_DEG: Triple<number> = [0, -120, 120];
  * load (rectifier, switch-mode supply) are drawn in step with the voltage waveform that
  * feeds it, whatever the displacement of its fundamental (a rectifier's 3rd harmonic sits
  * at 3 × its phase-voltage angle, plus a phase lag of its own that is the same on every
- * phase for like loads, so it cannot change the magnitudes of the sums). Referred to the
- * voltage, the triplens (3, 9, 15 …) of a balanced supply are exactly in phase and add
+ * phase for like loads, so it cannot change the magnitudes of the sums; common practice).
+ * Referred to the voltage, the triplens (3, 9, 15 …) of a balanced supply are in phase and add
  * arithmetically — the most the neutral can carry for those magnitudes, the 3 × h × I basis
  * of IEC 60364-5-52 Annex E. Referring them to h × the fundamental-current angle instead
  * would let phases at different power factors partly cancel in the neutral, which they do

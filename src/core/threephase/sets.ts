@@ -104,7 +104,7 @@ export function lineSetFromMagnitudes(m: Triple<number>, angleDeg = 30, name = '
     const others = m[(k + 1) % 3] + m[(k + 2) % 3];
     if (m[k] > others * (1 + NOISE_REL)) {
       const names = [labels[(k + 1) % 3], labels[(k + 2) % 3]].sort();
-      throw new PhzError(M.lineSetNotTriangle(name, labels[k], names.join(' + '), m[k], others));
+      throw new PhzError(M.lineSetNotTriangle(name, labels[k], names.join(' + '), m[k], Number(others.toPrecision(12))));
     }
   }
   const [a, b, c] = m;
