@@ -11,6 +11,7 @@ import * as math from 'mathjs';
 import { execFileSync } from 'node:child_process';
 import { functions } from '../src/functions';
 import { benchStarload } from './starload.bench';
+import { benchDeltaload } from './deltaload.bench';
 
 let sink = 0;
 
@@ -60,6 +61,7 @@ const CASES: Record<string, () => Promise<number> | number> = {
     return msOnce(() => functions.ADD([cells]));
   },
   starload: async () => (await benchStarload()).nsPerCall,
+  deltaload: async () => (await benchDeltaload()).nsPerCall,
 };
 
 function measure(name: string): number {
@@ -97,6 +99,8 @@ async function main(): Promise<void> {
   row('PHZ.ADD over a 100,000-cell column of text', `${sumMs.toFixed(1)} ms`, sumMs <= 30 ? 'met (≤ 30 ms)' : 'NOT MET (≤ 30 ms)');
   const star = measure('starload');
   row('PHZ.STARLOAD (3-wire, line Z; parse, solve, format 4×3)', `${(star / 1000).toFixed(2)} µs`, star <= 5000 ? 'met (≤ 5 µs)' : 'NOT MET (≤ 5 µs)');
+  const delta = measure('deltaload');
+  row('PHZ.DELTALOAD (line Z; parse, solve, format 3×4)', `${(delta / 1000).toFixed(2)} µs`);
 }
 
 void main();
