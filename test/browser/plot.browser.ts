@@ -212,7 +212,7 @@ describe('phasor plot in the preview', () => {
     await expect.poll(() => arrows().count()).toBe(0);
     const errRow = await rowOf('Current into a 0 Ω load');
     await select(`B${errRow}`);
-    await expect.poll(() => plot().locator('.sp-plot-unreadable li').first().textContent()).toMatch(new RegExp(`^B${errRow} .*holds an error value`));
+    await expect.poll(() => plot().locator('.sp-plot-unreadable li').first().textContent()).toMatch(new RegExp(`^B${errRow} .*holds the error #VALUE!`));
   });
 
   it('ran without page errors', () => {

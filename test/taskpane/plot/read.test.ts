@@ -46,7 +46,7 @@ describe('readSelection: shapes', () => {
     expect(d.unreadable.map((u) => u.cell)).toEqual(['C4', 'C5', 'C6']);
     expect(d.unreadable[0].message).toMatch(/^C4: cannot read "abc" as a phasor/);
     expect(d.unreadable[1].message).toMatch(/C5 is TRUE\/FALSE, not a phasor/);
-    expect(d.unreadable[2].message).toMatch(/C6 holds an error value/);
+    expect(d.unreadable[2].message).toMatch(/C6 holds the error #DIV\/0!: fix the cell it comes from first/);
   });
 
   it('reads two numeric columns as (real, imaginary) pairs, one phasor per row, with the row labels', () => {
