@@ -11,7 +11,7 @@ import { rect } from '../../core/phasor';
 import type { PlotData, PlotPhasor } from './model';
 import { groupDash, phasorStyle, SUM_STYLE, type MarkerShape, type PaletteName } from './palette';
 import { formatScaled, ringScales, type GroupScale } from './scale';
-import { placeLabels, type Box, type Placed } from './labels';
+import { overlaps, placeLabels, type Box, type Placed } from './labels';
 
 export type PlotView = 'origin' | 'tipToTail';
 
@@ -206,12 +206,18 @@ function makeArrow(a: ArrowInput, index: number, cx: number, cy: number, pxPer: 
   };
 }
 
-/** The direction (degrees) between spokes farthest from every arrow, for the ring values. */
-function quietAngle(angles: readonly number[]): number {
+/**
+ * The direction (degrees) between spokes farthest from every arrow, for the ring values;
+ * directions in `blocked` (where the values would run into the angle labels) only when
+ * every direction is.
+ */
+function quietAngle(angles: readonly number[], blocked: (deg: number) => boolean): number {
   let best = 75;
   let bestGap = -1;
   // Steep directions only, so stacked ring values keep the ring spacing between their lines.
-  for (const d of [75, 105, 45, 135, 255, 285, 225, 315]) {
+  const candidates = [75, 105, 45, 135, 255, 285, 225, 315];
+  const open = candidates.filter((d) => !blocked(d));
+  for (const d of open.length > 0 ? open : candidates) {
     let gap = 360;
     for (const a of angles) {
       const diff = Math.abs((((d - a) % 360) + 540) % 360 - 180);
@@ -366,20 +372,30 @@ export function layoutPlot(data: PlotData, options: PlotOptions = {}): Drawing {
   const arrows = inputs.map((a, k) => makeArrow(a, phasorIndex[k], cx, cy, R));
 
   // Ring values along the quietest direction between spokes.
-  const qa = quietAngle(arrows.filter((a) => a.role !== 'ghost').map((a) => a.angleDeg));
-  const rightSide = Math.cos(qa * DEG) >= 0;
   // Up to two groups' values beside each ring; with more, the legend gives each group's step.
-  const ringLabels: TextItem[] = rings.map((ring) => ({
-    text: ring.values.length <= 2 ? ring.values.join(' · ') : '',
-    x: cx + ring.r * Math.cos(qa * DEG) + (rightSide ? 3 : -3),
-    y: cy - ring.r * Math.sin(qa * DEG) - 3,
-    anchor: rightSide ? 'start' : 'end',
-  }));
+  const ringLabelsAt = (deg: number): TextItem[] => {
+    const rightSide = Math.cos(deg * DEG) >= 0;
+    return rings.map((ring) => ({
+      text: ring.values.length <= 2 ? ring.values.join(' · ') : '',
+      x: cx + ring.r * Math.cos(deg * DEG) + (rightSide ? 3 : -3),
+      y: cy - ring.r * Math.sin(deg * DEG) - 3,
+      anchor: rightSide ? 'start' : 'end',
+    }));
+  };
+  const spokeBoxes = spokes.map((s) => textBox({ text: s.label, x: s.lx, y: s.ly, anchor: s.anchor }));
+  const hitsSpokeLabel = (t: TextItem) => t.text !== '' && spokeBoxes.some((b) => overlaps(textBox(t), b, 1));
+  // The outer ring's value may give way to the angle labels at the rim (the legend's step gives it).
+  const inner = (labels: TextItem[]) => labels.slice(0, -1);
+  const qa = quietAngle(
+    arrows.filter((a) => a.role !== 'ghost').map((a) => a.angleDeg),
+    (deg) => inner(ringLabelsAt(deg)).some(hitsSpokeLabel),
+  );
+  const ringLabels = ringLabelsAt(qa).map((t, k, all) => (k === all.length - 1 && hitsSpokeLabel(t) ? { ...t, text: '' } : t));
 
   // Labels: the drawn arrows (not the faint ones) get one each, up to the limit.
   const labelled = arrows.map((a, k) => ({ a, k })).filter(({ a }) => a.role !== 'ghost');
   const obstacles: Box[] = [
-    ...spokes.map((s) => textBox({ text: s.label, x: s.lx, y: s.ly, anchor: s.anchor })),
+    ...spokeBoxes,
     ...ringLabels.filter((t) => t.text !== '').map((t) => textBox(t)),
     ...axisLabels.map((t) => textBox(t)),
   ];
@@ -390,6 +406,7 @@ export function layoutPlot(data: PlotData, options: PlotOptions = {}): Drawing {
       labelled.map(({ a, k }) => ({ arrow: k, text: a.label, x1: a.x1, y1: a.y1, x2: a.x2, y2: a.y2, colour: a.colour, marker: a.marker })),
       obstacles,
       { left: 2, top: 2, right: width - 2, bottom: cy + R + MARGIN - 20 },
+      arrows.filter((a) => a.role !== 'ghost'),
     );
   } else {
     notes.push(`${labelled.length} arrows: labels are in each arrow's tooltip and in the table.`);

@@ -30,7 +30,9 @@ export interface Placed {
   readonly text: string;
   readonly x: number;
   readonly y: number;
-  readonly anchor: 'start';
+  readonly anchor: 'start' | 'end';
+  /** Centre of the marker: at the end of the label nearer the tip. */
+  readonly markerX: number;
   readonly box: Box;
   readonly colour: string;
   readonly marker: MarkerShape;
@@ -54,15 +56,61 @@ function inside(b: Box, bounds: Box): boolean {
   return b.left >= bounds.left && b.right <= bounds.right && b.top >= bounds.top && b.bottom <= bounds.bottom;
 }
 
+/** Cuts a long label with an ellipsis, keeping a closing unit such as ` (A)` that tells groups apart. */
 export function shorten(text: string): string {
-  return text.length > MAX_LABEL_CHARS ? `${text.slice(0, MAX_LABEL_CHARS - 1)}…` : text;
+  if (text.length <= MAX_LABEL_CHARS) return text;
+  const tail = / \([^()]{1,6}\)$/.exec(text)?.[0] ?? '';
+  return `${text.slice(0, MAX_LABEL_CHARS - 1 - tail.length)}…${tail}`;
 }
+
+/** The point of `b` nearest to (x, y). */
+function nearest(b: Box, x: number, y: number): [number, number] {
+  return [Math.max(b.left, Math.min(b.right, x)), Math.max(b.top, Math.min(b.bottom, y))];
+}
+
+/** Beyond this distance from its tip a label gets a leader line. */
+const LEADER_FROM = 14;
 
 const TURNS = [0, 25, -25, 50, -50, 80, -80, 115, -115, 180].map((d) => (d * Math.PI) / 180);
 const DISTANCES = [5, 12, 22, 34, 48];
 
-/** Places every label; see the module comment. `bounds` is where labels may go near the tips. */
-export function placeLabels(requests: readonly LabelRequest[], obstacles: readonly Box[], bounds: Box): Placed[] {
+/** Whether the segment (x1, y1)–(x2, y2) passes through `b` (Liang–Barsky clipping). */
+export function segmentHitsBox(x1: number, y1: number, x2: number, y2: number, b: Box): boolean {
+  const dx = x2 - x1;
+  const dy = y2 - y1;
+  let t0 = 0;
+  let t1 = 1;
+  const edges: Array<[number, number]> = [
+    [-dx, x1 - b.left],
+    [dx, b.right - x1],
+    [-dy, y1 - b.top],
+    [dy, b.bottom - y1],
+  ];
+  for (const [p, q] of edges) {
+    if (p === 0) {
+      if (q < 0) return false;
+      continue;
+    }
+    const t = q / p;
+    if (p < 0) t0 = Math.max(t0, t);
+    else t1 = Math.min(t1, t);
+    if (t0 > t1) return false;
+  }
+  return true;
+}
+
+export interface Segment {
+  readonly x1: number;
+  readonly y1: number;
+  readonly x2: number;
+  readonly y2: number;
+}
+
+/**
+ * Places every label; see the module comment. `bounds` is where labels may go near the tips;
+ * spots that cross no arrow in `segments` are tried first.
+ */
+export function placeLabels(requests: readonly LabelRequest[], obstacles: readonly Box[], bounds: Box, segments: readonly Segment[] = []): Placed[] {
   const taken: Box[] = [...obstacles];
   const placedBoxes: Box[] = [];
   const out: Placed[] = [];
@@ -71,7 +119,19 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: readon
   const put = (r: LabelRequest, text: string, box: Box, leader?: Placed['leader']) => {
     taken.push(box);
     placedBoxes.push(box);
-    out.push({ arrow: r.arrow, text, x: box.left + MARKER_W, y: box.bottom - 4, anchor: 'start', box, colour: r.colour, marker: r.marker, leader });
+    const markerRight = (box.left + box.right) / 2 < r.x2;
+    out.push({
+      arrow: r.arrow,
+      text,
+      x: markerRight ? box.right - MARKER_W : box.left + MARKER_W,
+      y: box.bottom - 4,
+      anchor: markerRight ? 'end' : 'start',
+      markerX: markerRight ? box.right - 5 : box.left + 5,
+      box,
+      colour: r.colour,
+      marker: r.marker,
+      leader,
+    });
   };
 
   for (const r of requests) {
@@ -82,7 +142,9 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: readon
     const ux = len > 1e-9 ? (r.x2 - r.x1) / len : Math.SQRT1_2;
     const uy = len > 1e-9 ? (r.y2 - r.y1) / len : -Math.SQRT1_2;
     let done = false;
-    for (const d of DISTANCES) {
+    for (const clearOfArrows of [true, false]) {
+     if (done) break;
+     for (const d of DISTANCES) {
       for (const t of TURNS) {
         const dx = ux * Math.cos(t) - uy * Math.sin(t);
         const dy = ux * Math.sin(t) + uy * Math.cos(t);
@@ -91,13 +153,15 @@ export function placeLabels(requests: readonly LabelRequest[], obstacles: readon
         const left = dx > 0.35 ? px : dx < -0.35 ? px - w : px - w / 2;
         const top = dy < -0.35 ? py - BOX_H : dy > 0.35 ? py : py - BOX_H / 2;
         const box = { left, top, right: left + w, bottom: top + BOX_H };
-        if (inside(box, bounds) && free(box)) {
-          put(r, text, box);
+        if (inside(box, bounds) && free(box) && (!clearOfArrows || !segments.some((g) => segmentHitsBox(g.x1, g.y1, g.x2, g.y2, box)))) {
+          const [nx, ny] = nearest(box, r.x2, r.y2);
+          put(r, text, box, Math.hypot(nx - r.x2, ny - r.y2) > LEADER_FROM ? { x1: r.x2, y1: r.y2, x2: nx, y2: ny } : undefined);
           done = true;
           break;
         }
       }
       if (done) break;
+     }
     }
     if (done) continue;
     // At the side nearest the tip, in the free slot nearest its height; else below everything.

@@ -96,7 +96,7 @@ export function renderSvg(d: Drawing): string {
     if (l.leader) {
       out.push(`<line x1="${n(l.leader.x1)}" y1="${n(l.leader.y1)}" x2="${n(l.leader.x2)}" y2="${n(l.leader.y2)}" stroke="${l.colour}" stroke-width="0.8" opacity="0.7"/>`);
     }
-    out.push(markerPath(l.marker, l.box.left + 5, (l.box.top + l.box.bottom) / 2, 8, l.colour));
+    out.push(markerPath(l.marker, l.markerX, (l.box.top + l.box.bottom) / 2, 8, l.colour));
     out.push(text(l, `fill="${l.colour}" paint-order="stroke" stroke="#ffffff" stroke-width="3"`));
   }
   out.push(`</g>`);
