@@ -4,6 +4,8 @@
  * this interface, so it never touches Office globals and runs unchanged in the preview.
  * Later features extend it (writing worked sheets, reading a selection to plot).
  */
+import type { SheetPlan } from './sheets/plan';
+
 export interface ActiveCell {
   /** Name of the worksheet holding the active cell, e.g. `Sub-board`. */
   readonly sheet: string;
@@ -44,6 +46,25 @@ export interface PhasorChartResult {
   readonly chartName: string;
 }
 
+/** What writing a worked sheet did, for the status line. */
+export interface SheetWriteResult {
+  /** The new sheet's name (it is now the active sheet). */
+  readonly sheet: string;
+  /** Cells written (constants and formulas). */
+  readonly cells: number;
+  /** Names defined, all scoped to the new sheet. */
+  readonly names: number;
+}
+
+/** The selected cells' values, for "Read from selection". */
+export interface SelectionValues {
+  readonly sheet: string;
+  /** A1 address of the selection without the sheet, e.g. `B6:D6`. */
+  readonly address: string;
+  /** Rows of values as the cells show them (`null` for empty). */
+  readonly values: ReadonlyArray<ReadonlyArray<string | number | boolean | null>>;
+}
+
 export interface WorkbookPort {
   /** Shown to the user, e.g. `Excel` or `Preview`. */
   readonly hostName: string;
@@ -51,4 +72,14 @@ export interface WorkbookPort {
   getActiveCell(): Promise<ActiveCell>;
   /** Writes a formula (starting with `=`) into the active cell; results may spill. */
   setActiveCellFormula(formula: string): Promise<void>;
+  /**
+   * Worked sheets: writes `plan` to a NEW sheet (a free, valid name made from
+   * `plan.sheetName`), never over an existing sheet or cell, with its names scoped to that
+   * sheet, and activates it. Hosts without it cannot write sheets.
+   */
+  writeSheetPlan?(plan: SheetPlan): Promise<SheetWriteResult>;
+  /** Why this host cannot write worked sheets (e.g. a missing requirement set), or null when it can. */
+  sheetWritingBlocked?(): string | null;
+  /** The values of the selected cells. */
+  readSelection?(): Promise<SelectionValues>;
 }
