@@ -33,6 +33,8 @@ export interface FieldSpec {
   readonly hint: string;
   /** The group the pane shows it in (`Supply`, `Loads` …). */
   readonly group: string;
+  /** The sheet name of its input cell; default made from the id (`E1` → `E_1`). */
+  readonly name?: string;
 }
 
 /** A field's value once read: what goes into the sheet's input cell. */

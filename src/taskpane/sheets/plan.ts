@@ -150,12 +150,14 @@ export function uniqueSheetName(base: string, existing: readonly string[]): stri
 // ------------------------------------------------------------------ names
 
 /**
- * A sheet-scoped name from a symbol: `E1` → `E_1`, `ZL1` → `Z_L1`, `VN` → `V_N`: a letter,
- * an underscore, then the rest, so it can never be read as a cell address (A1 or R1C1).
+ * A sheet-scoped name from a symbol: `E1` → `E_1`, `ZL1` → `Z_L1`, `VN` → `V_N`, `pf1` →
+ * `pf_1`: the leading letter(s), an underscore, then the rest, so it can never be read as a cell address (A1 or R1C1).
  */
 export function nameOf(symbol: string): string {
   const s = symbol.replace(/[^A-Za-z0-9_]/g, '');
   if (!/^[A-Za-z]/.test(s)) throw new Error(`a name must start with a letter: ${symbol}`);
+  const lower = /^([a-z]+)([0-9]+)$/.exec(s);
+  if (lower) return `${lower[1]}_${lower[2]}`;
   return s.length === 1 ? `${s}_` : s.includes('_') ? s : `${s[0]}_${s.slice(1)}`;
 }
 

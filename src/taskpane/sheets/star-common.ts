@@ -24,7 +24,7 @@ export function lineFields(demo: readonly [string, string, string]): FieldSpec[]
 /** The phasor inputs E1–E3, Z1–Z3 (and what `more` adds), in the sheet's inputs block. */
 export function phasorInputs(b: PlanBuilder, fields: readonly FieldSpec[], values: FieldValues): void {
   for (const f of fields) {
-    b.input({ field: f.id, quantity: f.label, value: values[f.id], unit: f.unit, kind: f.kind === 'phasor' ? 'phasor' : f.kind === 'number' ? 'number' : 'text', hint: f.hint });
+    b.input({ field: f.id, quantity: f.label, value: values[f.id], unit: f.unit, kind: f.kind === 'phasor' ? 'phasor' : f.kind === 'number' ? 'number' : 'text', hint: f.hint, name: f.name });
   }
 }
 
