@@ -353,7 +353,7 @@ export class PlanBuilder {
     } else if (kind === 'number') {
       this.put(r, COL.polar, `=${F.six(at)}`, 'result');
     } else {
-      this.put(r, COL.polar, `=${at}`, 'result');
+      this.put(r, COL.polar, `=IF(ISNUMBER(${at}), ${F.six(at)}, ${at})`, 'result');
     }
     this.put(r, COL.unit, spec.unit, 'unit');
     this.put(r, COL.formula, `=FORMULATEXT(${at})`, 'formulaText');
@@ -377,6 +377,16 @@ export class PlanBuilder {
     this.put(top, COL.formula, `=FORMULATEXT(${cellA1(top, COL.value)})`, 'formulaText');
     this.row += rowLabels.length;
     return (r, c) => cellA1(top + r, COL.value + c);
+  }
+
+  /** One one-call function giving one value: label in B, the formula in E. Returns E's address. */
+  solverValue(label: string, formula: string): string {
+    const r = this.row++;
+    const at = cellA1(r, COL.value);
+    this.put(r, COL.quantity, label, 'label');
+    this.put(r, COL.value, `=${formula}`, 'value');
+    this.put(r, COL.formula, `=FORMULATEXT(${at})`, 'formulaText');
+    return at;
   }
 
   /** A check: residual formula (a number ≥ 0), its tolerance, pass/fail. */
