@@ -379,6 +379,24 @@ export class PlanBuilder {
     return (r, c) => cellA1(top + r, COL.value + c);
   }
 
+  /**
+   * A small table of constants and formulas from column E (e.g. the argument table of a
+   * function), `rowLabels` in B and `columnLabels` above. Returns its A1 range.
+   */
+  table(label: string, rows: ReadonlyArray<ReadonlyArray<string | number>>, rowLabels: readonly string[], columnLabels: readonly string[]): string {
+    const head = this.row++;
+    this.put(head, COL.quantity, label, 'label');
+    columnLabels.forEach((t, c) => this.put(head, COL.value + c, t, 'header'));
+    const top = this.row;
+    rows.forEach((cells, r) => {
+      if (rowLabels[r]) this.put(top + r, COL.quantity, rowLabels[r], 'label');
+      cells.forEach((v, c) => this.put(top + r, COL.value + c, v, 'value'));
+    });
+    this.row += rows.length;
+    const width = Math.max(...rows.map((r) => r.length));
+    return `${cellA1(top, COL.value)}:${cellA1(top + rows.length - 1, COL.value + width - 1)}`;
+  }
+
   /** One one-call function giving one value: label in B, the formula in E. Returns E's address. */
   solverValue(label: string, formula: string): string {
     const r = this.row++;
