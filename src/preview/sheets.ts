@@ -24,6 +24,8 @@ const STYLE_OF: Partial<Record<CellRole, CellStyle>> = {
   chart: 'chart',
   formulaText: 'formulaText',
   symbol: 'symbol',
+  label: 'label',
+  unit: 'label',
 };
 
 /** Writes `plan` to a new sheet (a free name made from `plan.sheetName`); never touches another sheet. */
@@ -34,6 +36,6 @@ export function writePlanToWorkbook(workbook: Workbook, plan: SheetPlan): SheetW
     const style = STYLE_OF[c.role];
     return style ? [{ row: c.row, col: c.col, style }] : [];
   });
-  workbook.addSheetWith({ name, rows, styles, names: plan.names }, `Write sheet ${name}`);
+  workbook.addSheetWith({ name, rows, styles, names: plan.names, columnWidths: plan.columnWidths }, `Write sheet ${name}`);
   return { sheet: name, cells: plan.cells.length, names: plan.names.length };
 }

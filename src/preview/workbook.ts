@@ -41,7 +41,8 @@ export type CellStyle =
   | 'caution'
   | 'chart'
   | 'formulaText'
-  | 'symbol';
+  | 'symbol'
+  | 'label';
 
 /** A whole new sheet at once: cells from A1, styles, and names scoped to the sheet. */
 export interface SheetContent {
@@ -51,6 +52,8 @@ export interface SheetContent {
   readonly styles?: ReadonlyArray<{ readonly row: number; readonly col: number; readonly style: CellStyle }>;
   /** Names scoped to the new sheet, each referring to one of its cells. */
   readonly names?: ReadonlyArray<{ readonly name: string; readonly row: number; readonly col: number }>;
+  /** Column widths in characters from column A (the grid sizes the others to fit). */
+  readonly columnWidths?: readonly number[];
 }
 
 /** A sheet name as a formula reference: quoted, inner apostrophes doubled. */
@@ -71,6 +74,7 @@ export class Workbook {
   private readonly redoStack: Edit[] = [];
   private readonly listeners = new Set<ChangeListener>();
   private readonly styles = new Map<string, CellStyle>();
+  private readonly widths = new Map<string, readonly number[]>();
 
   constructor(readonly engine: PhzEngine) {}
 
@@ -230,6 +234,12 @@ export class Workbook {
       if (content.rows.length > 0) hf.setCellContents({ sheet: id, row: 0, col: 0 }, content.rows);
     });
     for (const s of content.styles ?? []) this.setStyle(content.name, s.row, s.col, s.style);
+    if (content.columnWidths) this.widths.set(content.name, content.columnWidths);
+  }
+
+  /** Column widths in characters a sheet asked for (from column A), or none. */
+  columnWidths(sheet: string): readonly number[] {
+    return this.widths.get(sheet) ?? [];
   }
 
   /** Names scoped to `sheet`. */

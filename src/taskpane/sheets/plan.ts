@@ -472,7 +472,7 @@ export class PlanBuilder {
       sheetName: this.header.sheetName,
       cells: this.cells.slice(),
       names: this.names.slice(),
-      columnWidths: [6, 34, 9, 34, 40, 22, 26, 8, 60, 3, 14],
+      columnWidths: [5, 40, 8, 36, 24, 20, 22, 7, 64, 2, 14],
       inputs: this.inputs.slice(),
       steps: this.steps.slice(),
       checks: this.checks.slice(),
