@@ -66,9 +66,10 @@ export function write(calc: Calculation, values: Record<string, FieldValue>): Wr
 /**
  * Every step of the plan equals its reference, relative 1e-9; every step must have one. A
  * quantity that cancels to (nearly) 0 is compared against a millionth of the largest
- * quantity of the same unit instead, the size of what produced it.
+ * quantity of the same unit instead, the size of what produced it (or `floors[unit]`, e.g.
+ * for percentages that are all near 0).
  */
-export function expectStepsMatch(w: Written, reference: Readonly<Record<string, Expected>>, rel = 1e-9): void {
+export function expectStepsMatch(w: Written, reference: Readonly<Record<string, Expected>>, rel = 1e-9, floors: Readonly<Record<string, number>> = {}): void {
   const unitScale = new Map<string, number>();
   for (const step of w.plan.steps) {
     const want = reference[step.name];
@@ -76,7 +77,7 @@ export function expectStepsMatch(w: Written, reference: Readonly<Record<string, 
     unitScale.set(step.unit, Math.max(unitScale.get(step.unit) ?? 0, m));
   }
   for (const step of w.plan.steps) {
-    const floor = Math.max(1e-12, 1e-6 * (unitScale.get(step.unit) ?? 0));
+    const floor = Math.max(1e-12, 1e-6 * (unitScale.get(step.unit) ?? 0), floors[step.unit] ?? 0);
     const want = reference[step.name];
     expect(want, `the reference has no value for step ${step.number} ${step.name}`).toBeDefined();
     const got = w.value(step.name);
