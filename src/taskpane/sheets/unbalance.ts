@@ -171,7 +171,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
     quantity: 'Motor derating factor (NEMA MG 1 curve, on LVUR)',
     symbol: 'k derate',
     name: 'k_derate',
-    relation: `factor read from the curve at LVUR; none above ${NEMA_MAX_PCT} %`,
+    relation: `k derate = NEMA MG 1 curve at LVUR (none above ${NEMA_MAX_PCT} %)`,
     formula: `IF(LVUR_pct>${NEMA_MAX_PCT}, "none: operation above ${NEMA_MAX_PCT} % not recommended", PHZ.MOTORDERATE(LVUR_pct))`,
     unit: '',
     kind: 'text',
