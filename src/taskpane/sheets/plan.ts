@@ -5,10 +5,16 @@
  * file) build plans with `PlanBuilder`; the Excel and preview adapters write them. No host
  * code here.
  *
- * Layout of every sheet (columns):
- *   A step number · B quantity · C symbol · D relation in words · E value (the named cell:
- *   an input, or the step's live formula at 15 significant figures) · F polar, 6 figures ·
- *   G rectangular, 6 figures · H unit · I the formula of E as text (FORMULATEXT).
+ * Layout of every sheet (columns), so a reader sees the result beside its relation:
+ *   steps:  A step number · B quantity · C symbol · D relation in words · E polar, 6 figures ·
+ *           F rectangular, 6 figures · G unit · H the value at 15 significant figures (the
+ *           named cell holding the live formula, which later steps read) · I the formula of
+ *           H as text (FORMULATEXT);
+ *   inputs: B quantity · C symbol · D how to give it · E the value (named, styled as input) ·
+ *           F read as polar · G unit · H read as rectangular;
+ *   checks: B check · D what must hold · E residual · F tolerance · G pass/fail · H unit ·
+ *           I source;
+ *   one-call functions and tables start in E.
  * The chart place sits to the right (K onwards), beside the inputs.
  */
 import type { PhasorChartRequest } from '../port';
@@ -71,13 +77,14 @@ export interface PlanInput {
   /** The pane field's id (also the symbol shown, e.g. `E1`). */
   readonly field: string;
   readonly name: string;
+  /** The value cell: row, and column `COL.input`. */
   readonly row: number;
   readonly kind: ValueKind;
 }
 
 export interface PlanCheck {
   readonly label: string;
-  /** Rows of the residual (E), tolerance (F) and verdict (G) cells. */
+  /** The row of the residual (`COL.residual`), tolerance and verdict cells. */
   readonly row: number;
   readonly tolerance: number;
 }
@@ -104,7 +111,31 @@ export interface SheetPlan {
 }
 
 /** Column indexes of the layout. */
-export const COL = { step: 0, quantity: 1, symbol: 2, relation: 3, value: 4, polar: 5, rect: 6, unit: 7, formula: 8, chart: 10 } as const;
+export const COL = {
+  step: 0,
+  quantity: 1,
+  symbol: 2,
+  relation: 3,
+  /** Steps. */
+  polar: 4,
+  rect: 5,
+  unit: 6,
+  value: 7,
+  formula: 8,
+  /** Inputs. */
+  input: 4,
+  inputPolar: 5,
+  inputRect: 7,
+  /** Checks. */
+  residual: 4,
+  tolerance: 5,
+  verdict: 6,
+  checkUnit: 7,
+  source: 8,
+  /** One-call functions, tables and verdict rows start here. */
+  block: 4,
+  chart: 10,
+} as const;
 
 /** Significant figures of the values later steps read (the `digits` argument). */
 export const FULL = 15;
@@ -270,7 +301,7 @@ export class PlanBuilder {
     this.put(
       4,
       0,
-      'Column E holds each value at 15 significant figures, which later steps read; F and G show it to 6 figures. Column I shows the formula of E.',
+      'Steps show their value to 6 figures in polar (E) and rectangular (F) form; H holds it at 15 significant figures, which later steps read, and I shows its formula.',
       'note',
     );
     this.row = 6;
@@ -306,8 +337,8 @@ export class PlanBuilder {
     if (this.row > this.chartTop) this.row++;
     this.put(this.row++, 0, title, 'heading');
     const heads: Record<string, readonly string[]> = {
-      inputs: ['', 'Input', 'Symbol', 'How to give it', 'Value (edit me)', 'Read as (polar)', 'Rectangular', 'Unit'],
-      steps: ['Step', 'Quantity', 'Symbol', 'Relation', 'Value, 15 figures', 'Polar', 'Rectangular', 'Unit', 'Formula of the value'],
+      inputs: ['', 'Input', 'Symbol', 'How to give it', 'Value (edit me)', 'Read as (polar)', 'Unit', 'Read as (rectangular)'],
+      steps: ['Step', 'Quantity', 'Symbol', 'Relation', 'Polar', 'Rectangular', 'Unit', 'Value, 15 figures (used by later steps)', 'Formula of the value'],
       checks: ['', 'Check', '', 'What must hold', 'Residual', 'Tolerance', 'Result', 'Unit', 'Source'],
     };
     const h = heads[columns];
@@ -324,13 +355,13 @@ export class PlanBuilder {
     this.put(r, COL.quantity, spec.quantity, 'label');
     this.put(r, COL.symbol, spec.field, 'symbol');
     if (spec.hint) this.put(r, COL.relation, spec.hint, 'note');
-    this.put(r, COL.value, spec.value, 'input');
+    this.put(r, COL.input, spec.value, 'input');
     if (spec.kind === 'phasor') {
-      this.put(r, COL.polar, `=PHZ.TOPOLAR(${name})`, 'result');
-      this.put(r, COL.rect, `=PHZ.TORECT(${name})`, 'result');
+      this.put(r, COL.inputPolar, `=PHZ.TOPOLAR(${name})`, 'result');
+      this.put(r, COL.inputRect, `=PHZ.TORECT(${name})`, 'result');
     }
-    this.put(r, COL.unit, spec.unit, 'unit');
-    this.addName(name, r, COL.value, `${spec.field}: ${spec.quantity}${spec.unit ? ` (${spec.unit})` : ''}, input`);
+    if (spec.unit) this.put(r, COL.unit, spec.unit, 'unit');
+    this.addName(name, r, COL.input, `${spec.field}: ${spec.quantity}${spec.unit ? ` (${spec.unit})` : ''}, input`);
     this.inputs.push({ field: spec.field, name, row: r, kind: spec.kind });
     return name;
   }
@@ -355,7 +386,7 @@ export class PlanBuilder {
     } else {
       this.put(r, COL.polar, `=IF(ISNUMBER(${at}), ${F.six(at)}, ${at})`, 'result');
     }
-    this.put(r, COL.unit, spec.unit, 'unit');
+    if (spec.unit) this.put(r, COL.unit, spec.unit, 'unit');
     this.put(r, COL.formula, `=FORMULATEXT(${at})`, 'formulaText');
     this.addName(name, r, COL.value, `${spec.symbol}: ${spec.quantity}, step ${n}`);
     this.steps.push({ number: n, quantity: spec.quantity, symbol: spec.symbol, relation: spec.relation, name, row: r, kind, unit: spec.unit });
@@ -363,20 +394,20 @@ export class PlanBuilder {
   }
 
   /**
-   * A one-call solver block: a label row, then the formula in E spilling `rows` × `cols`
+   * A one-call solver block: a label row, then the formula in E (`COL.block`) spilling `rows` × `cols`
    * with `columnLabels` above it and `rowLabels` in B. Returns the A1 address of the
    * result cell at (r, c) of the spill.
    */
   solverBlock(label: string, formula: string, rowLabels: readonly string[], columnLabels: readonly string[]): (r: number, c: number) => string {
     const head = this.row++;
     this.put(head, COL.quantity, label, 'label');
-    columnLabels.forEach((t, c) => this.put(head, COL.value + c, t, 'header'));
+    columnLabels.forEach((t, c) => this.put(head, COL.block + c, t, 'header'));
     const top = this.row;
-    this.put(top, COL.value, `=${formula}`, 'value');
+    this.put(top, COL.block, `=${formula}`, 'value');
     rowLabels.forEach((t, r) => this.put(top + r, COL.quantity, t, 'label'));
-    this.put(top, COL.formula, `=FORMULATEXT(${cellA1(top, COL.value)})`, 'formulaText');
+    this.put(top, COL.formula, `=FORMULATEXT(${cellA1(top, COL.block)})`, 'formulaText');
     this.row += rowLabels.length;
-    return (r, c) => cellA1(top + r, COL.value + c);
+    return (r, c) => cellA1(top + r, COL.block + c);
   }
 
   /**
@@ -386,23 +417,23 @@ export class PlanBuilder {
   table(label: string, rows: ReadonlyArray<ReadonlyArray<string | number>>, rowLabels: readonly string[], columnLabels: readonly string[]): string {
     const head = this.row++;
     this.put(head, COL.quantity, label, 'label');
-    columnLabels.forEach((t, c) => this.put(head, COL.value + c, t, 'header'));
+    columnLabels.forEach((t, c) => this.put(head, COL.block + c, t, 'header'));
     const top = this.row;
     rows.forEach((cells, r) => {
       if (rowLabels[r]) this.put(top + r, COL.quantity, rowLabels[r], 'label');
-      cells.forEach((v, c) => this.put(top + r, COL.value + c, v, 'value'));
+      cells.forEach((v, c) => this.put(top + r, COL.block + c, v, 'value'));
     });
     this.row += rows.length;
     const width = Math.max(...rows.map((r) => r.length));
-    return `${cellA1(top, COL.value)}:${cellA1(top + rows.length - 1, COL.value + width - 1)}`;
+    return `${cellA1(top, COL.block)}:${cellA1(top + rows.length - 1, COL.block + width - 1)}`;
   }
 
   /** One one-call function giving one value: label in B, the formula in E. Returns E's address. */
   solverValue(label: string, formula: string): string {
     const r = this.row++;
-    const at = cellA1(r, COL.value);
+    const at = cellA1(r, COL.block);
     this.put(r, COL.quantity, label, 'label');
-    this.put(r, COL.value, `=${formula}`, 'value');
+    this.put(r, COL.block, `=${formula}`, 'value');
     this.put(r, COL.formula, `=FORMULATEXT(${at})`, 'formulaText');
     return at;
   }
@@ -410,15 +441,15 @@ export class PlanBuilder {
   /** A check: residual formula (a number ≥ 0), its tolerance, pass/fail. */
   check(label: string, relation: string, residual: string, tolerance: number, source: string, unit = 'relative'): void {
     const r = this.row++;
-    const res = cellA1(r, COL.value);
-    const tol = cellA1(r, COL.polar);
+    const res = cellA1(r, COL.residual);
+    const tol = cellA1(r, COL.tolerance);
     this.put(r, COL.quantity, label, 'label');
     this.put(r, COL.relation, relation, 'label');
-    this.put(r, COL.value, `=${residual}`, 'check');
-    this.put(r, COL.polar, tolerance, 'check');
-    this.put(r, COL.rect, `=IF(${res}<=${tol}, "pass", "FAIL")`, 'verdict');
-    this.put(r, COL.unit, unit, 'unit');
-    this.put(r, COL.formula, source, 'note');
+    this.put(r, COL.residual, `=${residual}`, 'check');
+    this.put(r, COL.tolerance, tolerance, 'check');
+    this.put(r, COL.verdict, `=IF(${res}<=${tol}, "pass", "FAIL")`, 'verdict');
+    this.put(r, COL.checkUnit, unit, 'unit');
+    this.put(r, COL.source, source, 'note');
     this.checks.push({ label, row: r, tolerance });
   }
 
@@ -427,13 +458,13 @@ export class PlanBuilder {
     this.put(this.row++, COL.quantity, text, role);
   }
 
-  /** A result row in words: label in B, formula in E (text or number), no name. */
+  /** A result row in words: label in B, formula in E (text or number), source in I; no name. */
   verdictRow(label: string, relation: string, formula: string, source: string): void {
     const r = this.row++;
     this.put(r, COL.quantity, label, 'label');
     this.put(r, COL.relation, relation, 'label');
-    this.put(r, COL.value, `=${formula}`, 'verdict');
-    this.put(r, COL.formula, source, 'note');
+    this.put(r, COL.block, `=${formula}`, 'verdict');
+    this.put(r, COL.source, source, 'note');
   }
 
   /** Cautions (DESIGN §8) as a block of notes. */
@@ -472,7 +503,7 @@ export class PlanBuilder {
       sheetName: this.header.sheetName,
       cells: this.cells.slice(),
       names: this.names.slice(),
-      columnWidths: [5, 40, 8, 36, 24, 20, 22, 7, 64, 2, 14],
+      columnWidths: [9, 36, 8, 34, 20, 22, 7, 36, 60, 2, 14],
       inputs: this.inputs.slice(),
       steps: this.steps.slice(),
       checks: this.checks.slice(),

@@ -58,7 +58,7 @@ export function write(calc: Calculation, values: Record<string, FieldValue>): Wr
     setInput(field, value) {
       const input = plan.inputs.find((i) => i.field === field);
       if (!input) throw new Error(`no input ${field}`);
-      wb.setCell(sheet, input.row, COL.value, value);
+      wb.setCell(sheet, input.row, COL.input, value);
     },
   };
 }
@@ -101,8 +101,8 @@ export function expectStepsMatch(w: Written, reference: Readonly<Record<string, 
 export function expectChecksPass(w: Written): void {
   expect(w.plan.checks.length).toBeGreaterThan(0);
   for (const c of w.plan.checks) {
-    const residual = w.display(c.row, COL.value);
-    const verdict = w.display(c.row, COL.rect);
+    const residual = w.display(c.row, COL.residual);
+    const verdict = w.display(c.row, COL.verdict);
     expect(typeof residual, `${c.label}: residual ${JSON.stringify(residual)}`).toBe('number');
     expect(residual as number, c.label).toBeLessThanOrEqual(c.tolerance);
     expect(verdict, c.label).toBe('pass');
@@ -130,5 +130,5 @@ export const div = (a: MComplex | number, b: MComplex | number): MComplex => mat
 export const conj = (a: MComplex): MComplex => math.conj(a) as MComplex;
 export const abs = (a: MComplex): number => math.abs(a) as unknown as number;
 export const arg = (a: MComplex): number => math.arg(a) as unknown as number;
-export const polar = (m: number, deg: number): MComplex => math.complex({ abs: m, arg: (deg * Math.PI) / 180 });
+export const polar = (m: number, deg: number): MComplex => math.complex(m * Math.cos((deg * Math.PI) / 180), m * Math.sin((deg * Math.PI) / 180));
 export const ZERO = math.complex(0, 0);

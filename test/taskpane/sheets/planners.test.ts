@@ -122,7 +122,7 @@ describe.each(plans)('plan %s', (id, plan) => {
   it('has one input per field, styled as input, with symbol, description, value and unit', () => {
     expect(plan.inputs.map((i) => i.field)).toEqual(calc.fields.map((f) => f.id));
     for (const input of plan.inputs) {
-      expect(at.get(`${input.row},${COL.value}`)!.role).toBe('input');
+      expect(at.get(`${input.row},${COL.input}`)!.role).toBe('input');
       expect(at.get(`${input.row},${COL.symbol}`)!.content).toBe(input.field);
       expect(String(at.get(`${input.row},${COL.quantity}`)!.content).length).toBeGreaterThan(5);
       expect(at.has(`${input.row},${COL.unit}`) || calc.fields.find((f) => f.id === input.field)!.unit === '').toBe(true);
@@ -156,8 +156,8 @@ describe.each(plans)('plan %s', (id, plan) => {
   it('has checks with a tolerance and a pass/fail cell, including agreement with a one-call function', () => {
     expect(plan.checks.length).toBeGreaterThanOrEqual(3);
     for (const c of plan.checks) {
-      expect(at.get(`${c.row},${COL.polar}`)!.content).toBe(c.tolerance);
-      expect(String(at.get(`${c.row},${COL.rect}`)!.content)).toMatch(/"pass", "FAIL"/);
+      expect(at.get(`${c.row},${COL.tolerance}`)!.content).toBe(c.tolerance);
+      expect(String(at.get(`${c.row},${COL.verdict}`)!.content)).toMatch(/"pass", "FAIL"/);
       expect(c.tolerance).toBeLessThanOrEqual(1e-4);
     }
     expect(plan.checks.some((c) => /agree/i.test(c.label))).toBe(true);
@@ -237,6 +237,6 @@ describe('the supply unbalance sheet takes magnitudes or phasors', () => {
     expect(byPhasor.steps.some((s) => s.name === 'V_0')).toBe(true);
     // magnitudes are written as numbers
     const v12 = byMag.inputs.find((i) => i.field === 'V12')!;
-    expect(byMag.cells.find((c) => c.row === v12.row && c.col === COL.value)!.content).toBe(411);
+    expect(byMag.cells.find((c) => c.row === v12.row && c.col === COL.input)!.content).toBe(411);
   });
 });

@@ -221,6 +221,6 @@ describe('worked sheet: star load from power and power factor, in the preview en
   it('shows the value cells the way the pane wrote them', () => {
     const w = write(starPower, demo);
     const p1 = w.plan.inputs.find((i) => i.field === 'P1')!;
-    expect(w.display(p1.row, COL.value)).toBe(Number(demo.P1));
+    expect(w.display(p1.row, COL.input)).toBe(Number(demo.P1));
   });
 });

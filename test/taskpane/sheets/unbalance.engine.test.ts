@@ -71,7 +71,7 @@ function reference(v: Values): Record<string, Expected> {
 }
 
 function verdicts(w: Written): string[] {
-  return w.plan.cells.filter((c) => c.role === 'verdict' && c.col === COL.value).map((c) => String(w.display(c.row, c.col)));
+  return w.plan.cells.filter((c) => c.role === 'verdict' && c.col === COL.block).map((c) => String(w.display(c.row, c.col)));
 }
 
 describe('worked sheet: supply unbalance check, in the preview engine', () => {
