@@ -104,6 +104,9 @@ describe('worked sheets from the pane, in the preview', () => {
     // inputs look like inputs
     expect(await cell(cellA1(plan.inputs[0].row, COL.input)).getAttribute('class')).toMatch(/k-input|s-input/);
     await page.screenshot({ path: path.join(shots, `worked-sheet-${id}.png`) });
+    // and the end of the sheet: checks and cautions
+    await selectCell(cellA1(plan.extent.rows - 1, 1));
+    await page.screenshot({ path: path.join(shots, `worked-sheet-${id}-checks.png`) });
   });
 
   it('recalculates the sheet when an input is changed on it', async () => {
@@ -142,6 +145,7 @@ describe('worked sheets from the pane, in the preview', () => {
     await expect.poll(() => page.locator(`#${errorId}`).textContent()).toBe(expected);
     expect(await field.getAttribute('aria-invalid')).toBe('true');
     expect(await page.getByRole('button', { name: 'Write sheet' }).isDisabled()).toBe(true);
+    expect(await page.locator('.sps-blocker').textContent()).toBe('Fix E1 (marked in red) to write the sheet.');
     await page.screenshot({ path: path.join(shots, 'worked-sheet-bad-input.png') });
     await field.fill('231∠0');
     await expect.poll(() => page.getByRole('button', { name: 'Write sheet' }).isEnabled()).toBe(true);

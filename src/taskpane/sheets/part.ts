@@ -63,6 +63,8 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   scenario.id = `${id}-scenario`;
   scenario.type = 'text';
   const form = el('div', 'sps-fields');
+  const blocker = el('p', 'sps-blocker');
+  blocker.id = `${id}-blocker`;
   const caseProblem = el('p', 'sps-case');
   caseProblem.setAttribute('role', 'alert');
   caseProblem.id = `${id}-case`;
@@ -101,6 +103,7 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
     form,
     caseProblem,
     note,
+    blocker,
     actions,
     status,
   );
@@ -129,11 +132,15 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   function refresh(): Record<string, FieldValue> | undefined {
     const values: Record<string, FieldValue> = {};
     let ok = true;
+    const bad: string[] = [];
     inputs.forEach((f, i) => {
       const v = checkField(i);
-      if (v === undefined) ok = false;
-      else values[f.spec.id] = v;
+      if (v === undefined) {
+        ok = false;
+        bad.push(f.spec.id);
+      } else values[f.spec.id] = v;
     });
+    blocker.textContent = bad.length > 0 ? `Fix ${bad.join(', ')} (marked in red) to write the sheet.` : '';
     caseProblem.textContent = '';
     if (ok) {
       try {
