@@ -1,11 +1,14 @@
 /**
  * Builds dist/: the shared runtime page (taskpane.html: custom functions + pane), the
- * preview workbook (preview.html, when src/preview exists), functions.json, the icons,
- * a local copy of office.js and the manifest.
+ * preview workbook (preview.html, when src/preview exists), functions.json, the icons and
+ * the manifest.
  *
- *   npm run build       production; STARPOINT_PUBLIC_URL=https://host/path rewrites the
- *                       manifest's https://localhost:3000 to that address
- *   npm run build:dev   development, manifest kept on https://localhost:3000
+ *   npm run build       production: taskpane.html loads office.js from Microsoft's CDN and
+ *                       its policy allows that origin; STARPOINT_PUBLIC_URL=https://host/path
+ *                       rewrites the manifest's https://localhost:3000 to that address (a
+ *                       build without it warns: the manifest then points at localhost)
+ *   npm run build:dev   development: a local copy of office.js in dist/office-js, the
+ *                       manifest kept on https://localhost:3000; nothing loads from outside
  */
 const fs = require('node:fs');
 const path = require('node:path');
@@ -14,26 +17,10 @@ const { WebpackError } = require('webpack');
 const HtmlWebpackPlugin = require('html-webpack-plugin');
 const CopyWebpackPlugin = require('copy-webpack-plugin');
 const CustomFunctionsMetadataPlugin = require('custom-functions-metadata-plugin');
+const { publicUrl, rewriteManifest, missingUrlWarning } = require('./scripts/public-url');
+const { officeJsSrc, paneCsp } = require('./scripts/pane-page');
 
-const DEV_URL = 'https://localhost:3000';
 const root = (...parts) => path.resolve(__dirname, ...parts);
-
-/** The public base URL for a production manifest, or null to keep the dev URL. */
-function publicUrl() {
-  const raw = (process.env.STARPOINT_PUBLIC_URL ?? '').trim();
-  if (raw === '') return null;
-  let url;
-  try {
-    url = new URL(raw);
-  } catch {
-    throw new Error(`STARPOINT_PUBLIC_URL is not a URL: "${raw}". Give e.g. https://addins.example.org/starpoint`);
-  }
-  if (url.protocol !== 'https:') {
-    throw new Error(`STARPOINT_PUBLIC_URL must start with https:// (Office loads add-ins over HTTPS only): "${raw}"`);
-  }
-  if (url.search || url.hash) throw new Error(`STARPOINT_PUBLIC_URL must not have a query or fragment: "${raw}"`);
-  return url.href.replace(/\/+$/, '');
-}
 
 /** Fails the build when a named entry pulls in a module from one of `packages`. */
 class KeepPackagesOutOfEntry {
@@ -90,6 +77,18 @@ class DeclarationsAreFresh {
   }
 }
 
+/** Adds a build warning (shown with webpack's own warnings). */
+class WarnWith {
+  constructor(message) {
+    this.message = message;
+  }
+  apply(compiler) {
+    compiler.hooks.thisCompilation.tap('WarnWith', (compilation) => {
+      compilation.warnings.push(new WebpackError(this.message));
+    });
+  }
+}
+
 /** Warns when functions.json came out empty (a registry with no functions yet). */
 class WarnOnEmptyMetadata {
   apply(compiler) {
@@ -106,7 +105,8 @@ class WarnOnEmptyMetadata {
 
 module.exports = (env, argv) => {
   const production = argv.mode === 'production';
-  const base = production ? publicUrl() : null;
+  // Throws on a bad address, so a production build never ships a broken manifest.
+  const base = production ? publicUrl(process.env.STARPOINT_PUBLIC_URL) : null;
 
   const hasPreview = fs.existsSync(root('src/preview/main.ts')) && fs.existsSync(root('src/preview/preview.html'));
   if (!hasPreview) console.warn('webpack: src/preview/main.ts or preview.html missing; building without the preview page.');
@@ -118,6 +118,7 @@ module.exports = (env, argv) => {
       template: './src/taskpane/taskpane.html',
       chunks: ['taskpane'],
       hash: production,
+      templateParameters: { officeJs: officeJsSrc(production), csp: paneCsp(production) },
     }),
   ];
   if (hasPreview) {
@@ -192,19 +193,25 @@ module.exports = (env, argv) => {
           {
             from: 'manifest/manifest.xml',
             to: 'manifest.xml',
-            transform: (content) => (base ? content.toString('utf8').replaceAll(DEV_URL, base) : content),
+            transform: (content) => (base ? rewriteManifest(content.toString('utf8'), base) : content),
           },
-          {
-            // office.js loads its host and locale scripts from its own folder, so copy it whole
-            // (minus debug builds and typings; taskpane.html loads office.js, not office.debug.js).
-            from: 'node_modules/@microsoft/office-js/dist',
-            to: 'office-js',
-            globOptions: { ignore: ['**/*.debug.js', '**/*.d.ts', '**/office-vsdoc.js'] },
-            // Already minified: keep Terser off these 26 MB (it would take minutes).
-            info: { minimized: true },
-          },
+          // Production pages load office.js from the CDN, so only development copies it.
+          ...(production
+            ? []
+            : [
+                {
+                  // office.js loads its host and locale scripts from its own folder, so copy it whole
+                  // (minus debug builds and typings; taskpane.html loads office.js, not office.debug.js).
+                  from: 'node_modules/@microsoft/office-js/dist',
+                  to: 'office-js',
+                  globOptions: { ignore: ['**/*.debug.js', '**/*.d.ts', '**/office-vsdoc.js'] },
+                  // Already minified: keep Terser off these 26 MB (it would take minutes).
+                  info: { minimized: true },
+                },
+              ]),
         ],
       }),
+      ...(production && !base ? [new WarnWith(missingUrlWarning())] : []),
     ],
   };
 };

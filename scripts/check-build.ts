@@ -1,15 +1,25 @@
 /**
  * After `npm run build`: the built dist/functions.json lists every registry entry, in
  * order, with matrix phasor parameters and matrix results; the production add-in bundle
- * holds no HyperFormula; and the built bundle, loaded beside Excel's own custom-functions
- * runtime and called through it with host messages shaped by dist/functions.json, gives
- * every documented example (test/host/). Run by .ci/run; exits non-zero on any mismatch.
+ * holds no HyperFormula; taskpane.html loads office.js from where its build mode says, with
+ * the matching Content-Security-Policy; and the built bundle, loaded beside Excel's own
+ * custom-functions runtime and called through it with host messages shaped by
+ * dist/functions.json, gives every documented example (test/host/). Run by .ci/run; exits
+ * non-zero on any mismatch.
  */
-import { readFileSync, readdirSync } from 'node:fs';
+import { existsSync, readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
+import { createRequire } from 'node:module';
 import { specs } from '../src/functions';
 import { ExcelRuntime } from '../test/host/excel-runtime';
 import { HostEvaluator } from '../test/host/host-examples';
+
+// pane-page.js is CommonJS (webpack.config.js requires it too)
+const { OFFICE_JS_CDN, OFFICE_JS_LOCAL, paneCsp } = createRequire(__filename)('./pane-page.js') as {
+  OFFICE_JS_CDN: string;
+  OFFICE_JS_LOCAL: string;
+  paneCsp(production: boolean): string;
+};
 
 interface MetaParam {
   name: string;
@@ -45,6 +55,20 @@ for (const s of specs) {
 for (const file of readdirSync(dist).filter((f) => /^taskpane.*\.js$/.test(f))) {
   if (/HyperFormula|hyperformula/.test(readFileSync(join(dist, file), 'utf8'))) problems.push(`${file} contains HyperFormula`);
 }
+// The add-in's page: office.js from the CDN with a policy allowing exactly that origin and
+// no local copy (production), or the local copy with a policy of this origin only (development).
+const pane = readFileSync(join(dist, 'taskpane.html'), 'utf8');
+const officeSrc = /<script\s+src=["']?([^"'\s>]*office\.js)["'\s>]/i.exec(pane)?.[1];
+const policy = /<meta\s+http-equiv=["']?Content-Security-Policy["']?\s+content="([^"]+)"/i.exec(pane)?.[1];
+const production = officeSrc === OFFICE_JS_CDN;
+const localCopy = existsSync(join(dist, 'office-js', 'office.js'));
+if (officeSrc !== OFFICE_JS_CDN && officeSrc !== OFFICE_JS_LOCAL) problems.push(`taskpane.html loads office.js from ${officeSrc ?? 'nowhere'}`);
+if (policy !== paneCsp(production)) problems.push(`taskpane.html's Content-Security-Policy is "${policy}", not "${paneCsp(production)}"`);
+if (production && localCopy) problems.push('a production build loads office.js from the CDN but still copies the local office-js folder');
+if (!production && !localCopy) problems.push('a development build loads office-js/office.js but dist/office-js/office.js is missing');
+const mode = production ? 'production: office.js from the CDN, policy allows that origin only' : 'development: local office.js, policy of this origin only';
+
+
 /** Same cell text; numbers within 1e-9 relative. */
 function sameCells(got: unknown, want: ReadonlyArray<ReadonlyArray<unknown>>): boolean {
   if (!Array.isArray(got) || got.length !== want.length) return false;
@@ -81,7 +105,7 @@ void examplesThroughBundle().then((count) => {
   }
   console.log(
     `dist check: functions.json lists all ${names.length} registry functions with matrix parameters; no HyperFormula in the add-in bundle; ` +
-      `all ${count} documented examples give their results through Excel's custom-functions runtime and the built bundle`,
+      `all ${count} documented examples give their results through Excel's custom-functions runtime and the built bundle; ${mode}`,
   );
   process.exit(0);
 });

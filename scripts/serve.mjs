@@ -64,15 +64,25 @@ function build() {
   });
 }
 
-function previewCsp() {
+/** The policy in a built page's meta tag, or null when the page or the tag is missing. */
+function metaCsp(page) {
   try {
-    const html = readFileSync(path.join(dist, 'preview.html'), 'utf8');
-    const m = /<meta\s+http-equiv="Content-Security-Policy"\s+content="([^"]+)"/i.exec(html);
+    const html = readFileSync(path.join(dist, page), 'utf8');
+    // the production build minifies the page and drops the quotes around http-equiv's value
+    const m = /<meta\s+http-equiv=["']?Content-Security-Policy["']?\s+content="([^"]+)"/i.exec(html);
     if (m) return m[1].replace(/\s+/g, ' ').trim();
   } catch {
-    // no preview page built
+    // page not built
   }
-  return FALLBACK_CSP;
+  return null;
+}
+
+/** Each page's policy, sent as a header too: the same as its meta tag. */
+function pagePolicies() {
+  const policies = { 'preview.html': metaCsp('preview.html') ?? FALLBACK_CSP };
+  const pane = metaCsp('taskpane.html');
+  if (pane) policies['taskpane.html'] = pane;
+  return policies;
 }
 
 function certificates() {
@@ -92,7 +102,7 @@ function certificates() {
   }
 }
 
-function handler(csp) {
+function handler(policies) {
   return (req, res) => {
     const send = (status, text, headers = {}) => {
       res.writeHead(status, { 'Content-Type': 'text/plain; charset=utf-8', 'Cache-Control': 'no-store', ...headers });
@@ -121,9 +131,9 @@ function handler(csp) {
       'Cache-Control': 'no-store',
       'X-Content-Type-Options': 'nosniff',
     };
-    // The preview page gets the same policy as its meta tag. The add-in's own page is
-    // left to the Office host, which loads office.js on its own terms.
-    if (path.basename(file) === 'preview.html') headers['Content-Security-Policy'] = csp;
+    // The preview and the add-in's page get the same policy as their meta tags.
+    const csp = path.dirname(file) === dist ? policies[path.basename(file)] : undefined;
+    if (csp) headers['Content-Security-Policy'] = csp;
     res.writeHead(200, headers);
     if (req.method === 'HEAD') return res.end();
     createReadStream(file).pipe(res);
@@ -158,7 +168,8 @@ async function main() {
   }
 
   const certs = certificates();
-  const make = () => (certs ? https.createServer(certs.options, handler(previewCsp())) : http.createServer(handler(previewCsp())));
+  const policies = pagePolicies();
+  const make = () => (certs ? https.createServer(certs.options, handler(policies)) : http.createServer(handler(policies)));
   const servers = [make()];
   let actualPort;
   try {

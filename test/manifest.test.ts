@@ -1,9 +1,15 @@
 /**
- * Checks manifest/manifest.xml against the rules of the add-in only (XML) manifest that
- * Office enforces when sideloading, as documented in the Office Add-ins manifest reference
- * (learn.microsoft.com/javascript/api/manifest: Runtime, SourceLocation, Namespace and
- * String elements) and "Configure your Office Add-in to use a shared runtime"
- * (learn.microsoft.com/office/dev/add-ins/develop/configure-your-add-in-to-use-a-shared-runtime).
+ * Checks manifest/manifest.xml, and the manifest a production build writes with
+ * STARPOINT_PUBLIC_URL, against the rules of the add-in only (XML) manifest that Office
+ * enforces when sideloading and that its XML schemas state, as documented in the Office
+ * Add-ins manifest reference (learn.microsoft.com/javascript/api/manifest: OfficeApp,
+ * Runtime, SourceLocation, Namespace and String elements), "Configure your Office Add-in to
+ * use a shared runtime" (learn.microsoft.com/office/dev/add-ins/develop/configure-your-add-in-to-use-a-shared-runtime),
+ * the schema types "OfficeApp complexType (apps for Office 1.1)" and "TaskPaneApp complexType
+ * (apps for Office 1.1)", and [MS-OWEMXML] Office Web Extensibility Manifest Format §5.6
+ * (OfficeAppBasicTypes: ShortString 1–125, LongString 1–250, ReferenceId 1–32, URL 1–2048
+ * characters). The schema files are not vendored here: these tests parse the manifest and
+ * check what those schemas state.
  */
 import { readFileSync, existsSync } from 'node:fs';
 import { createRequire } from 'node:module';
@@ -12,8 +18,33 @@ import { describe, expect, it } from 'vitest';
 import { XMLParser, XMLValidator } from 'fast-xml-parser';
 
 const ROOT = resolve(__dirname, '..');
-const DEV_URL = 'https://localhost:3000/';
-const xml = readFileSync(resolve(ROOT, 'manifest/manifest.xml'), 'utf8');
+const DEV_BASE = 'https://localhost:3000';
+const source = readFileSync(resolve(ROOT, 'manifest/manifest.xml'), 'utf8');
+const load = createRequire(import.meta.url);
+
+/** scripts/public-url.js (CommonJS, shared with webpack.config.js). */
+const publicUrlModule = load(resolve(ROOT, 'scripts/public-url.js')) as {
+  publicUrl(raw: string | undefined): string | null;
+  rewriteManifest(xml: string, base: string): string;
+};
+
+/** A public address with characters XML must escape (& and ') in its path. */
+const PUBLIC_BASE = publicUrlModule.publicUrl("https://addins.example.org/tools/r&d's/starpoint/")!;
+
+/** The manifest a production build writes: the copy step of webpack.config.js itself, run on the source. */
+function builtManifest(base: string): string {
+  const previous = process.env.STARPOINT_PUBLIC_URL;
+  process.env.STARPOINT_PUBLIC_URL = base;
+  try {
+    const config = load(resolve(ROOT, 'webpack.config.js'))({}, { mode: 'production' });
+    const copy = config.plugins.find((p: any) => Array.isArray(p.patterns));
+    const pattern = copy.patterns.find((q: any) => q.from === 'manifest/manifest.xml');
+    return String(pattern.transform(Buffer.from(source, 'utf8')));
+  } finally {
+    if (previous === undefined) delete process.env.STARPOINT_PUBLIC_URL;
+    else process.env.STARPOINT_PUBLIC_URL = previous;
+  }
+}
 
 interface El {
   readonly tag: string;
@@ -23,8 +54,8 @@ interface El {
   readonly parent: El | null;
 }
 
-/** The manifest as a plain element tree (fast-xml-parser's ordered output, reshaped). */
-function parse(source: string): El {
+/** The manifest as a plain element tree (fast-xml-parser's ordered output, reshaped; entities decoded). */
+function parse(text: string): El {
   const parser = new XMLParser({ preserveOrder: true, ignoreAttributes: false, attributeNamePrefix: '' });
   const build = (nodes: any[], parent: El | null): El[] =>
     nodes
@@ -46,7 +77,7 @@ function parse(source: string): El {
         el.children.push(...build(kids, el));
         return el;
       });
-  const roots = build(parser.parse(source), null);
+  const roots = build(parser.parse(text), null);
   expect(roots).toHaveLength(1);
   return roots[0];
 }
@@ -56,14 +87,6 @@ function* walk(el: El): Generator<El> {
   for (const c of el.children) yield* walk(c);
 }
 
-const doc = parse(xml);
-const all = [...walk(doc)];
-const find = (pred: (e: El) => boolean) => all.filter(pred);
-const one = (pred: (e: El) => boolean, what: string): El => {
-  const found = find(pred);
-  expect(found, what).toHaveLength(1);
-  return found[0];
-};
 const child = (el: El, tag: string) => el.children.find((c) => c.tag === tag);
 
 type Kind = 'image' | 'url' | 'short' | 'long';
@@ -74,16 +97,6 @@ const RESOURCE_GROUPS: Record<string, Kind> = {
   'bt:LongStrings': 'long',
 };
 
-/** Every resource defined under <Resources>, by id. */
-const resources = new Map<string, { kind: Kind; value: string }>();
-const duplicateIds: string[] = [];
-for (const group of find((e) => e.tag in RESOURCE_GROUPS && e.parent?.tag === 'Resources')) {
-  for (const r of group.children) {
-    if (resources.has(r.attrs.id)) duplicateIds.push(r.attrs.id);
-    resources.set(r.attrs.id, { kind: RESOURCE_GROUPS[group.tag], value: r.attrs.DefaultValue });
-  }
-}
-
 /** What kind of resource each referencing element needs. */
 function expectedKind(el: El): Kind | null {
   if (el.tag === 'bt:Image') return 'image';
@@ -93,10 +106,51 @@ function expectedKind(el: El): Kind | null {
   return null;
 }
 
-const references = find((e) => 'resid' in e.attrs);
-const urlOf = (resid: string) => resources.get(resid)?.value ?? '';
+/** True when `tags` (the children's tags) follow `order`, with only tags of `order` present. */
+function inSchemaOrder(tags: readonly string[], order: readonly string[]): boolean {
+  let at = 0;
+  for (const t of tags) {
+    const i = order.indexOf(t, at);
+    if (i < 0) return false;
+    at = i;
+  }
+  return true;
+}
 
-describe('manifest/manifest.xml', () => {
+/** Every attribute value that is a URL Office loads (namespace names are identifiers, not addresses). */
+function urlsOf(all: readonly El[]): string[] {
+  return all
+    .flatMap((e) => Object.entries(e.attrs))
+    .filter(([name, v]) => !name.startsWith('xmlns') && /^[a-z][a-z0-9+.-]*:\/\//i.test(v))
+    .map(([, v]) => v);
+}
+
+const VARIANTS: ReadonlyArray<readonly [string, string, string]> = [
+  ['manifest/manifest.xml', source, DEV_BASE],
+  [`the built manifest (STARPOINT_PUBLIC_URL=${PUBLIC_BASE})`, builtManifest(PUBLIC_BASE), PUBLIC_BASE],
+];
+
+describe.each(VARIANTS)('%s', (_, xml, base) => {
+  const root = `${base}/`;
+  const doc = parse(xml);
+  const all = [...walk(doc)];
+  const find = (pred: (e: El) => boolean) => all.filter(pred);
+  const one = (pred: (e: El) => boolean, what: string): El => {
+    const found = find(pred);
+    expect(found, what).toHaveLength(1);
+    return found[0];
+  };
+  const resources = new Map<string, { kind: Kind; value: string }>();
+  const duplicateIds: string[] = [];
+  for (const group of find((e) => e.tag in RESOURCE_GROUPS && e.parent?.tag === 'Resources')) {
+    for (const r of group.children) {
+      if (resources.has(r.attrs.id)) duplicateIds.push(r.attrs.id);
+      resources.set(r.attrs.id, { kind: RESOURCE_GROUPS[group.tag], value: r.attrs.DefaultValue });
+    }
+  }
+  const references = find((e) => 'resid' in e.attrs);
+  const urlOf = (resid: string) => resources.get(resid)?.value ?? '';
+
   it('is well-formed XML', () => {
     expect(XMLValidator.validate(xml)).toBe(true);
   });
@@ -111,6 +165,31 @@ describe('manifest/manifest.xml', () => {
     expect(child(child(doc, 'Hosts')!, 'Host')?.attrs.Name).toBe('Workbook');
   });
 
+  it('has the elements the schema requires, in the order it requires', () => {
+    // OfficeApp complexType (apps for Office 1.1), then the TaskPaneApp extension of it.
+    const order = [
+      'Id', 'AlternateId', 'Version', 'ProviderName', 'DefaultLocale', 'DisplayName', 'Description', 'IconUrl',
+      'HighResolutionIconUrl', 'SupportUrl', 'AppDomains', 'Hosts',
+      'Requirements', 'DefaultSettings', 'Permissions', 'Dictionary', 'VersionOverrides',
+    ];
+    const tags = doc.children.map((c) => c.tag);
+    expect(inSchemaOrder(tags, order), tags.join(', ')).toBe(true);
+    for (const required of ['Id', 'Version', 'ProviderName', 'DefaultLocale', 'DisplayName', 'Description', 'DefaultSettings', 'Permissions']) {
+      expect(tags.filter((t) => t === required), required).toHaveLength(1);
+    }
+    expect(child(child(doc, 'DefaultSettings')!, 'SourceLocation'), 'DefaultSettings/SourceLocation').toBeDefined();
+    // VersionOverrides (TaskPaneAppVersionOverrides V1_0): Hosts before Resources; a Host's
+    // Runtimes, AllFormFactors, DesktopFormFactor in that order; GetStarted, FunctionFile,
+    // then the extension points of a DesktopFormFactor.
+    const overrides = child(doc, 'VersionOverrides')!;
+    expect(inSchemaOrder(overrides.children.map((c) => c.tag), ['Description', 'Requirements', 'Hosts', 'Resources'])).toBe(true);
+    const host = child(child(overrides, 'Hosts')!, 'Host')!;
+    expect(inSchemaOrder(host.children.map((c) => c.tag), ['Runtimes', 'AllFormFactors', 'DesktopFormFactor'])).toBe(true);
+    const desktop = child(host, 'DesktopFormFactor')!;
+    expect(inSchemaOrder(desktop.children.map((c) => c.tag), ['GetStarted', 'FunctionFile', 'ExtensionPoint'])).toBe(true);
+    expect(inSchemaOrder(child(overrides, 'Resources')!.children.map((c) => c.tag), Object.keys(RESOURCE_GROUPS))).toBe(true);
+  });
+
   it('resolves every resid to a resource of the right kind', () => {
     expect(references.length).toBeGreaterThan(10);
     for (const el of references) {
@@ -122,19 +201,22 @@ describe('manifest/manifest.xml', () => {
   });
 
   it('keeps every resid and resource id within 32 characters, ids unique', () => {
-    // "Can be no more than 32 characters" (manifest reference: Runtime, SourceLocation, Namespace).
+    // ReferenceId: 1 to 32 characters (MS-OWEMXML §5.6; manifest reference: Runtime, SourceLocation, Namespace).
     expect(duplicateIds).toEqual([]);
     for (const id of [...resources.keys(), ...references.map((e) => e.attrs.resid)]) {
+      expect(id.length, id).toBeGreaterThanOrEqual(1);
       expect(id.length, id).toBeLessThanOrEqual(32);
     }
   });
 
   it('keeps strings within the schema lengths (ShortString 125, LongString 250)', () => {
-    // Manifest reference, String element: ≤ 125 under <ShortStrings>, ≤ 250 under <LongStrings>.
+    // ShortString 1–125 and LongString 1–250 characters (MS-OWEMXML §5.6; manifest reference, String element).
     for (const [id, r] of resources) {
       if (r.kind === 'short') expect(r.value.length, id).toBeLessThanOrEqual(125);
       if (r.kind === 'long') expect(r.value.length, id).toBeLessThanOrEqual(250);
+      expect(r.value.length, id).toBeGreaterThanOrEqual(1);
     }
+    expect(child(doc, 'ProviderName')!.text.length).toBeLessThanOrEqual(125);
     expect(child(doc, 'DisplayName')!.attrs.DefaultValue.length).toBeLessThanOrEqual(125);
     expect(child(doc, 'Description')!.attrs.DefaultValue.length).toBeLessThanOrEqual(250);
   });
@@ -156,7 +238,7 @@ describe('manifest/manifest.xml', () => {
     // The base manifest's pane page is the same page.
     const defaultPage = child(child(doc, 'DefaultSettings')!, 'SourceLocation')!.attrs.DefaultValue;
     expect(defaultPage).toBe(urlOf(resid));
-    expect(urlOf(resid)).toBe(`${DEV_URL}taskpane.html`);
+    expect(urlOf(resid)).toBe(`${root}taskpane.html`);
   });
 
   it('requires the shared runtime and custom functions runtime requirement sets', () => {
@@ -172,7 +254,7 @@ describe('manifest/manifest.xml', () => {
     const ns = child(point, 'Namespace')!.attrs.resid;
     expect(resources.get(ns)?.value).toBe('PHZ');
     const metadata = child(child(point, 'Metadata')!, 'SourceLocation')!.attrs.resid;
-    expect(urlOf(metadata)).toBe(`${DEV_URL}functions.json`);
+    expect(urlOf(metadata)).toBe(`${root}functions.json`);
   });
 
   it('opens the pane from a button on the Home tab', () => {
@@ -184,14 +266,16 @@ describe('manifest/manifest.xml', () => {
     expect(up).toBe(tab);
   });
 
-  it('uses https for every URL', () => {
-    // Namespace names (xmlns, xmlns:bt …) are identifiers, not addresses Office loads.
-    const urls = all
-      .flatMap((e) => Object.entries(e.attrs))
-      .filter(([name, v]) => !name.startsWith('xmlns') && /^[a-z][a-z0-9+.-]*:\/\//i.test(v))
-      .map(([, v]) => v);
+  it('uses https for every URL, all on this address, each within 2048 characters', () => {
+    // URL: 1 to 2048 characters (MS-OWEMXML §5.6); Office loads add-in pages over HTTPS only.
+    const urls = urlsOf(all);
     expect(urls.length).toBeGreaterThan(5);
-    for (const url of urls) expect(url, url).toMatch(/^https:\/\//);
+    for (const url of urls) {
+      expect(url, url).toMatch(/^https:\/\//);
+      expect(url.startsWith(root), url).toBe(true);
+      expect(() => new URL(url), url).not.toThrow();
+      expect(url.length, url).toBeLessThanOrEqual(2048);
+    }
   });
 
   it('points every icon at a PNG in assets/ of the declared size', () => {
@@ -207,8 +291,8 @@ describe('manifest/manifest.xml', () => {
     ];
     expect(icons.length).toBeGreaterThanOrEqual(5);
     for (const [url, px] of icons) {
-      expect(url.startsWith(`${DEV_URL}assets/`), url).toBe(true);
-      const file = resolve(ROOT, url.slice(DEV_URL.length));
+      expect(url.startsWith(`${root}assets/`), url).toBe(true);
+      const file = resolve(ROOT, url.slice(root.length));
       expect(existsSync(file), `${url} → ${file}`).toBe(true);
       expect(pngSize(file), url).toEqual([px, px]);
     }
@@ -216,19 +300,37 @@ describe('manifest/manifest.xml', () => {
 
   it('names only files the build emits (pages, entry bundles, functions.json, assets)', () => {
     // Ask the webpack config itself what it emits, so a renamed entry or page fails here.
-    const load = createRequire(import.meta.url)(resolve(ROOT, 'webpack.config.js'));
-    const config = load({}, { mode: 'development' });
+    const config = load(resolve(ROOT, 'webpack.config.js'))({}, { mode: 'development' });
     const emitted = new Set<string>([
       ...Object.keys(config.entry).map((name) => `${name}.js`),
       ...config.plugins.flatMap((p: any) => [p.userOptions?.filename, p.options?.output]).filter(Boolean),
     ]);
-    const localUrls = all
-      .flatMap((e) => Object.values(e.attrs))
-      .filter((v) => v.startsWith(DEV_URL))
-      .map((v) => v.slice(DEV_URL.length));
+    const localUrls = urlsOf(all).map((v) => v.slice(root.length));
     for (const file of localUrls) {
       if (file.startsWith('assets/')) expect(existsSync(resolve(ROOT, file)), file).toBe(true);
       else expect(emitted.has(file), `${file} is not produced by webpack.config.js`).toBe(true);
     }
+  });
+});
+
+describe('the built manifest with a public URL', () => {
+  const built = builtManifest(PUBLIC_BASE);
+
+  it('keeps no dev server address', () => {
+    expect(source).toContain(DEV_BASE);
+    expect(built).not.toContain(DEV_BASE);
+  });
+
+  it('escapes the address for XML where it is written', () => {
+    expect(built).toContain('https://addins.example.org/tools/r&amp;d&apos;s/starpoint/taskpane.html');
+    expect(built).not.toMatch(/&(?!amp;|apos;|quot;|lt;|gt;)/);
+  });
+
+  it('differs from the source only in the addresses', () => {
+    expect(built.split('https://addins.example.org/tools/r&amp;d&apos;s/starpoint').join(DEV_BASE)).toBe(source);
+  });
+
+  it('is what rewriteManifest writes (the build uses the module the unit tests check)', () => {
+    expect(built).toBe(publicUrlModule.rewriteManifest(source, PUBLIC_BASE));
   });
 });

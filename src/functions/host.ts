@@ -1,6 +1,7 @@
 /**
  * The shared guard around every implementation: argument counting, omitted arguments,
- * and the rule that no stray exception and no NaN/∞ reaches a cell.
+ * and the rule that no stray exception and no NaN/∞ reaches a cell (an exception that is
+ * not a PhzError becomes the generic internal-error message; its text goes to the console).
  */
 import { PhzError, isPhzError } from '../core/errors';
 import { readerMessages as M } from '../core/messages';
@@ -17,7 +18,11 @@ export function guarded(spec: FunctionSpec): (...args: any[]) => HostResult {
     try {
       result = impl(...args);
     } catch (e) {
-      throw isPhzError(e) ? e : new PhzError(M.internal(name, e instanceof Error ? e.message : String(e)));
+      if (isPhzError(e)) throw e;
+      // Not ours: its text may be anything (a library's wording, a stack detail), so the
+      // cell gets the generic message and the console gets the detail for a report.
+      console.error(`PHZ.${name}: internal error`, e);
+      throw new PhzError(M.internal(name));
     }
     for (let r = 0; r < result.length; r++) {
       const row = result[r];

@@ -6,11 +6,19 @@
  * Shape rules (DESIGN §3): a range with exactly two numeric columns is read row by row
  * as (real, imaginary) pairs; every other range is read cell by cell, row by row.
  * `null`, `undefined` and `""` are blank cells.
+ *
+ * Cells holding Excel data types arrive as objects (cellvalues.ts): `asMatrix` and the
+ * scalar readers turn numbers, text and TRUE/FALSE with properties into their plain
+ * value, so every shape rule above sees them as plain cells; an entity carrying a phasor
+ * is read as that phasor; errors and other objects are refused with a message naming
+ * what the cell holds.
  */
 import { PhzError, isPhzError } from '../core/errors';
 import { readerMessages as M } from '../core/messages';
 import { parsePhasor, type Quantity } from '../core/parse';
-import { rect, type Phasor } from '../core/phasor';
+import { polar, polarDeg, rect, type Phasor } from '../core/phasor';
+import { valueMessages } from '../core/messages/values';
+import { describeObject, errorName, isEntity, phasorProperties, plainCell, plainRows } from './cellvalues';
 import { formatPolar, formatRect, DEFAULT_DIGITS } from '../core/format';
 import type { HostCell, HostResult } from './spec';
 
@@ -31,13 +39,17 @@ export function isBlank(v: unknown): boolean {
   return false;
 }
 
-/** Any host argument as rows of cells: a scalar becomes 1×1, a flat list one row. */
+/**
+ * Any host argument as rows of plain cells: a scalar becomes 1×1, a flat list one row, and
+ * a data-type cell holding a number, text or TRUE/FALSE becomes that value (`plainCell`).
+ * Without such objects the argument's own rows are returned, not a copy.
+ */
 export function asMatrix(arg: unknown): unknown[][] {
   if (Array.isArray(arg)) {
     if (arg.length === 0) return [];
-    return Array.isArray(arg[0]) ? (arg as unknown[][]) : [arg];
+    return plainRows(Array.isArray(arg[0]) ? (arg as unknown[][]) : [arg]);
   }
-  return [[arg]];
+  return [[typeof arg === 'object' && arg !== null ? plainCell(arg) : arg]];
 }
 
 /** Where a cell sits, for messages: "name", "name, row 2", "name, value 3", "name, row 1 column 2". */
@@ -62,15 +74,50 @@ function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: nu
   return otherCellPhasor(v, cellName(name, m, r, col));
 }
 
-/** A cell that is not text: a finite number, or an error naming the cell. */
+/** A cell that is not text: a finite number, an entity carrying a phasor, or an error naming the cell. */
 function otherCellPhasor(v: unknown, at: string): Phasor {
   if (typeof v === 'number') {
     if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
     return rect(v, 0);
   }
   if (typeof v === 'boolean') throw new PhzError(M.boolean(at));
-  if (typeof v === 'object' && v !== null && ('error' in v || 'type' in v || 'code' in v)) throw new PhzError(M.errorValue(at));
+  if (typeof v === 'object' && v !== null && !Array.isArray(v)) return objectPhasor(v, at);
   throw new PhzError(M.unsupported(at));
+}
+
+/** The PhzError for a data-type object where `what` was expected: an error names itself. */
+function refusal(v: object, at: string, expected: (got: string) => string): PhzError {
+  const error = errorName(v);
+  return new PhzError(error === undefined ? expected(describeObject(v)) : M.errorValue(at, error));
+}
+
+/** A number inside an entity property (a number, numeric text, or a number data type). */
+function propertyNumber(v: unknown, at: string): number {
+  const n = toNumber(v, at);
+  if (n === null) throw new PhzError(M.numberRequired(at));
+  return n;
+}
+
+/** A data-type object as a phasor: an entity whose properties carry one; anything else is refused. */
+function objectPhasor(v: object, at: string): Phasor {
+  if (!isEntity(v)) throw refusal(v, at, (got) => M.dataType(at, got));
+  const p = phasorProperties(v);
+  const what = describeObject(v);
+  switch (p.kind) {
+    case 'rect':
+      return rect(propertyNumber(p.re, M.property(at, p.names[0])), propertyNumber(p.im, M.property(at, p.names[1])));
+    case 'polar': {
+      const magAt = M.property(at, p.names[0]);
+      const m = propertyNumber(p.magnitude, magAt);
+      if (m < 0) throw new PhzError(valueMessages.negativeMagnitude(magAt, m));
+      const a = propertyNumber(p.angle, M.property(at, p.names[1]));
+      return p.radians ? polar(m, a) : polarDeg(m, a);
+    }
+    case 'half':
+      throw new PhzError(M.entityHalf(at, what, p.has, p.missing));
+    default:
+      throw new PhzError(M.entityNoPhasor(at, what));
+  }
 }
 
 /** Two columns of numbers (blanks allowed, at least one number): read as real/imaginary pairs. */
@@ -92,12 +139,15 @@ export function isPairBlock(m: unknown[][]): boolean {
  * are passed over; otherwise a blank is an error naming the cell.
  */
 export function readPhasors(arg: unknown, name: string, options: PhasorReadOptions = NO_OPTIONS): Phasor[] {
+  // the most common call: one text cell, read before any shape or data-type handling
+  if (Array.isArray(arg) && arg.length === 1) {
+    const row: unknown = arg[0];
+    if (Array.isArray(row) && row.length === 1 && typeof row[0] === 'string' && row[0] !== '') {
+      return [cellPhasor(row[0], name, arg as unknown[][], 0, 0, options.expect)];
+    }
+  }
   const m = asMatrix(arg);
   const skip = options.blanks === 'skip';
-  // the most common call: one text cell
-  if (m.length === 1 && m[0].length === 1 && typeof m[0][0] === 'string' && m[0][0] !== '') {
-    return [cellPhasor(m[0][0], name, m, 0, 0, options.expect)];
-  }
   const out: Phasor[] = [];
   if (isPairBlock(m)) {
     for (let r = 0; r < m.length; r++) {
@@ -166,16 +216,27 @@ function describe(v: unknown): string {
   if (typeof v === 'string') return `the text "${v.length > 40 ? v.slice(0, 37) + '…' : v}"`;
   if (typeof v === 'boolean') return v ? 'TRUE' : 'FALSE';
   if (Array.isArray(v)) return 'a range';
+  if (typeof v === 'object' && v !== null) return describeObject(v);
   return String(v);
+}
+
+/** A 1×1 range as its one cell, and a data-type object as its plain value (other values unchanged). */
+function oneCell(v: unknown): unknown {
+  if (Array.isArray(v)) {
+    const m = asMatrix(v);
+    return m.length === 1 && m[0].length === 1 ? m[0][0] : v;
+  }
+  return typeof v === 'object' && v !== null ? plainCell(v) : v;
 }
 
 /** One scalar → number. Numeric text ("6") is accepted; a 1×1 matrix is unwrapped. */
 function toNumber(v: unknown, at: string): number | null {
-  if (Array.isArray(v)) {
-    const m = asMatrix(v);
-    if (m.length === 1 && m[0].length === 1) v = m[0][0];
-    else throw new PhzError(M.numberExpected(at, 'a range of several cells'));
+  if (typeof v === 'number') {
+    if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
+    return v;
   }
+  v = oneCell(v);
+  if (Array.isArray(v)) throw new PhzError(M.numberExpected(at, 'a range of several cells'));
   if (isBlank(v)) return null;
   if (typeof v === 'number') {
     if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
@@ -186,6 +247,7 @@ function toNumber(v: unknown, at: string): number | null {
     const n = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t) ? Number(t) : NaN;
     if (Number.isFinite(n)) return n;
   }
+  if (typeof v === 'object' && v !== null) throw refusal(v, at, (got) => M.numberExpected(at, got));
   throw new PhzError(M.numberExpected(at, describe(v)));
 }
 
@@ -248,24 +310,19 @@ export function readDigits(v: unknown): number {
 
 /** Reads one of a fixed set of words, case-insensitive; blank or omitted gives `fallback`. */
 export function readChoice<T extends string>(v: unknown, name: string, choices: readonly T[], fallback: T): T {
-  if (Array.isArray(v)) {
-    const m = asMatrix(v);
-    if (m.length === 1 && m[0].length === 1) v = m[0][0];
-  }
+  v = oneCell(v);
   if (isBlank(v)) return fallback;
   if (typeof v === 'string') {
     const t = v.trim().toLowerCase();
     for (const c of choices) if (c.toLowerCase() === t) return c;
   }
+  if (typeof v === 'object' && v !== null && !Array.isArray(v)) throw refusal(v, name, (got) => M.choiceNotText(name, got, choices));
   throw new PhzError(M.choice(name, typeof v === 'string' ? v : describe(v), choices));
 }
 
 /** Reads TRUE/FALSE (also 1/0 and the words true/false); blank gives `fallback`. */
 export function readBoolean(v: unknown, name: string, fallback: boolean): boolean {
-  if (Array.isArray(v)) {
-    const m = asMatrix(v);
-    if (m.length === 1 && m[0].length === 1) v = m[0][0];
-  }
+  v = oneCell(v);
   if (isBlank(v)) return fallback;
   if (typeof v === 'boolean') return v;
   if (v === 1 || v === 0) return v === 1;
@@ -274,6 +331,7 @@ export function readBoolean(v: unknown, name: string, fallback: boolean): boolea
     if (t === 'true') return true;
     if (t === 'false') return false;
   }
+  if (typeof v === 'object' && v !== null && !Array.isArray(v)) throw refusal(v, name, (got) => M.booleanExpected(name, got));
   throw new PhzError(M.booleanExpected(name, describe(v)));
 }
 

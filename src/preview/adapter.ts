@@ -19,6 +19,7 @@ import {
 } from 'hyperformula';
 import type { FunctionMetadata, ImplementedFunctions, SimpleCellAddress } from 'hyperformula';
 import { isPhzError } from '../core/errors';
+import { readerMessages } from '../core/messages';
 import type { FunctionSpec, HostResult } from '../functions/spec';
 
 /** The namespace every registry function is called with (`PHZ.DIV`). */
@@ -248,8 +249,9 @@ export function createPhzPlugin(registry: Registry): typeof FunctionPlugin & { i
         return result;
       } catch (e) {
         if (isPhzError(e)) return new CellError(e.code === 'notAvailable' ? ErrorType.NA : ErrorType.VALUE, e.message);
-        const message = e instanceof Error ? e.message : String(e);
-        return new CellError(ErrorType.VALUE, `${id} failed unexpectedly: ${message}`);
+        // As in the shared guard: never the raw text of an exception that is not ours.
+        console.error(`${id}: internal error`, e);
+        return new CellError(ErrorType.VALUE, readerMessages.internal(spec.name));
       }
     }
 

@@ -1,6 +1,7 @@
 /**
  * The shared runtime page's entry: registers the custom functions and mounts the pane.
- * taskpane.html loads office.js (a local copy) before this bundle.
+ * taskpane.html loads office.js before this bundle (from the CDN in production, a local
+ * copy in development; scripts/pane-page.js).
  */
 import { registerAll } from '../functions/excel/register';
 import { mountPane } from './pane';

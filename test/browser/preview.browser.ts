@@ -265,3 +265,29 @@ describe('preview workbook in the browser', () => {
     expect(meta).toContain("default-src 'self'");
   });
 });
+
+describe('the add-in page of the development build in the browser', () => {
+  it('loads office.js from this server, breaks no policy, and shows the pane’s reference', async () => {
+    const own: string[] = [];
+    const pageProblems: string[] = [];
+    const pane = await browser.newPage();
+    try {
+      pane.on('request', (r) => own.push(r.url()));
+      pane.on('pageerror', (e) => pageProblems.push(`page error: ${e.message}`));
+      pane.on('console', (m) => {
+        if (/Content Security Policy/i.test(m.text())) pageProblems.push(`console ${m.type()}: ${m.text()}`);
+      });
+      const response = await pane.goto(`${server.origin}/taskpane.html`);
+      // Outside Office, Office.onReady reports no host and the pane shows the reference alone.
+      await pane.locator(`article[data-function="${specs[0].name}"]`).waitFor();
+      expect(own).toContain(`${server.origin}/office-js/office.js`);
+      expect(own.filter((u) => !u.startsWith(`${server.origin}/`) && !u.startsWith('data:') && !u.startsWith('blob:'))).toEqual([]);
+      expect(pageProblems).toEqual([]);
+      const meta = await pane.locator('meta[http-equiv="Content-Security-Policy"]').getAttribute('content');
+      expect(meta).toContain("script-src 'self';");
+      expect(response!.headers()['content-security-policy']).toBe(meta);
+    } finally {
+      await pane.close();
+    }
+  });
+});

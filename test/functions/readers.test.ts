@@ -62,7 +62,10 @@ describe('readPhasors: shapes of DESIGN §3', () => {
   });
   it('refuses booleans, error values and other objects with the cell named', () => {
     expect(expectPhzError(() => readPhasors([[true]], 'z')).message).toMatch(/^z is TRUE\/FALSE/);
-    expect(expectPhzError(() => readPhasors([[{ type: 'VALUE' }]], 'z')).message).toMatch(/error value/);
+    // Excel.ValueErrorCellValue (the JSON of a #VALUE! cell); more shapes in cellvalues.test.ts
+    expect(expectPhzError(() => readPhasors([[{ type: 'Error', errorType: 'Value', basicValue: '#VALUE!', basicType: 'Error' }]], 'z')).message).toBe(
+      'z holds the error #VALUE!: fix the cell it comes from first',
+    );
     expect(expectPhzError(() => readPhasors([[Symbol.iterator as unknown]], 'z')).message).toMatch(/neither a number nor text/);
     expect(expectPhzError(() => readPhasors([[Infinity]], 'z')).message).toMatch(/not a finite number/);
   });

@@ -35,6 +35,12 @@ export interface HostCall {
   /** One value per declared parameter, `null` for one left out; a repeating parameter as one array. */
   readonly parameterValues: unknown[];
   readonly address?: string;
+  /**
+   * Invocation flags as Excel sends them; 8 marks rich (data-type) parameter values, which the
+   * runtime unwraps from `{value: "<json>"}` (`_transferCustomFunctionRichData`). Left out, the
+   * runtime reads the function's options from the metadata entries instead.
+   */
+  readonly flags?: number;
 }
 
 export type HostOutcome =
@@ -98,7 +104,6 @@ export class ExcelRuntime {
       clearTimeout,
       setInterval,
       clearInterval,
-      JSON,
       _richApiNativeBridge: this.bridge,
       navigator: { userAgent: 'node' },
       history: { replaceState() {}, pushState() {} },
@@ -145,7 +150,13 @@ export class ExcelRuntime {
       calls.map((c, i) => ({
         messageCategory: 1,
         messageType: 1000,
-        message: JSON.stringify({ invocationId: ids[i], functionName: c.functionName, parameterValues: c.parameterValues, address: c.address ?? 'Sheet1!A1' }),
+        message: JSON.stringify({
+          invocationId: ids[i],
+          functionName: c.functionName,
+          parameterValues: c.parameterValues,
+          address: c.address ?? 'Sheet1!A1',
+          ...(c.flags === undefined ? {} : { flags: c.flags }),
+        }),
       })),
     );
     const deadline = Date.now() + timeoutMs;

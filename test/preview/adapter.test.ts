@@ -3,7 +3,7 @@
  * what they receive: matrices, repeats, omitted arguments, blanks, shapes, errors, and
  * spill areas that follow a change of inputs.
  */
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { PhzError } from '../../src/core/errors';
 import type { FunctionSpec, HostResult } from '../../src/functions/spec';
 import { PhzEngine, evaluateFormula, isDisplayError } from '../../src/preview/engine';
@@ -40,7 +40,11 @@ const TABLE = spec('TABLE', [{ name: 'n', type: 'scalar', description: '' }], (n
   Array.from({ length: n }, (_, r) => Array.from({ length: 2 }, (_, c) => r * 10 + c)),
 );
 
-const registry: Registry = { specs: [EACH, COUNT, MISSING, TABLE] };
+const CRASH = spec('CRASH', [{ name: 'a', type: 'scalar', description: '' }], () => {
+  throw new TypeError("Cannot read properties of undefined (reading 'im')");
+});
+
+const registry: Registry = { specs: [EACH, COUNT, MISSING, TABLE, CRASH] };
 const last = () => calls[calls.length - 1];
 
 describe('adapter: what implementations receive', () => {
@@ -97,6 +101,19 @@ describe('adapter: what implementations receive', () => {
 describe('adapter: errors', () => {
   it('maps notAvailable to #N/A and keeps the message', () => {
     expect(evaluateFormula('=PHZ.MISSING(1)', [], registry)).toEqual([[{ error: '#N/A', message: 'no value exists for this input (test)' }]]);
+  });
+
+  it('shows the generic message for an exception that is not ours, and logs the detail to the console', () => {
+    const log = vi.spyOn(console, 'error').mockImplementation(() => undefined);
+    try {
+      expect(evaluateFormula('=PHZ.CRASH(1)', [], registry)).toEqual([
+        [{ error: '#VALUE!', message: 'PHZ.CRASH could not compute this (internal error): check the inputs, and report the formula if they are valid' }],
+      ]);
+      expect(log).toHaveBeenCalled();
+      expect(String(log.mock.calls[0][1])).toContain('Cannot read properties');
+    } finally {
+      log.mockRestore();
+    }
   });
 
   it('reports too few and too many arguments with the signature', () => {

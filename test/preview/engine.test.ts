@@ -209,3 +209,25 @@ describe('preview engine: spills', () => {
     expectCells([[engine.display({ sheet: 0, row: 0, col: 0 })]], [[example.result[0][0]]], 'anchor after clearing');
   });
 });
+
+describe('preview engine: STARLOAD neutral left out versus a blank cell', () => {
+  // A1:A3 supply, B1:B3 loads, C1 blank, D1 = 0
+  const data = [
+    ["'230∠0", 23, null, 0],
+    ["'230∠-120", 46, null, null],
+    ["'230∠120", 23, null, null],
+  ];
+  const solid = evaluateFormula('=PHZ.STARLOAD(A1:A3, B1:B3, D1)', data);
+  it('left out, or an empty argument, is a solid neutral', () => {
+    expect(solid.flat().filter(isDisplayError)).toEqual([]);
+    expect(evaluateFormula('=PHZ.STARLOAD(A1:A3, B1:B3)', data)).toEqual(solid);
+    expect(evaluateFormula('=PHZ.STARLOAD(A1:A3, B1:B3, , )', data)).toEqual(solid);
+  });
+  it('a reference to a blank cell is #VALUE! asking for 0, an impedance or "open"', () => {
+    const shown = evaluateFormula('=PHZ.STARLOAD(A1:A3, B1:B3, C1)', data);
+    expect(shown[0][0]).toMatchObject({ error: '#VALUE!' });
+    expect((shown[0][0] as { message: string }).message).toMatch(/^neutral refers to a blank cell: give 0 for a solid neutral/);
+    const empty = evaluateFormula('=PHZ.STARLOAD(A1:A3, B1:B3, "")', data);
+    expect((empty[0][0] as { message: string }).message).toMatch(/^neutral refers to a blank cell/);
+  });
+});

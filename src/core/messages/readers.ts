@@ -13,11 +13,26 @@ export const readerMessages = {
   boolean(where: string): string {
     return `${where} is TRUE/FALSE, not a phasor: give a number or text such as 7+j5`;
   },
-  errorValue(where: string): string {
-    return `${where} holds an error value: fix the cell it comes from first`;
+  /** `error` as Excel shows it (`#DIV/0!`), or '' when the kind of error is not known. */
+  errorValue(where: string, error = ''): string {
+    return `${where} holds ${error === '' ? 'an error value' : `the error ${error}`}: fix the cell it comes from first`;
   },
   unsupported(where: string): string {
     return `${where} holds a value that is neither a number nor text: give a number or text such as 7+j5`;
+  },
+  /** A cell holding a data type that is not a phasor; `what` names it (`an image`, `the entity "Feeder 3"`). */
+  dataType(where: string, what: string): string {
+    return `${where} holds ${what}, not a phasor: give a number, text such as 7+j5, or an entity with properties real and imag (or magnitude and angle)`;
+  },
+  entityNoPhasor(where: string, what: string): string {
+    return `${where} holds ${what}, whose properties carry no phasor: give it the properties real and imag, or magnitude and angle (degrees)`;
+  },
+  entityHalf(where: string, what: string, has: string, missing: string): string {
+    return `${where} holds ${what} with the property "${has}" but no "${missing}": give both (0 for a zero part)`;
+  },
+  /** Where a property of an entity cell sits, for the number messages: `z, property "real"`. */
+  property(where: string, name: string): string {
+    return `${where}, property "${name}"`;
   },
   notFinite(where: string): string {
     return `${where} is not a finite number: give a finite value`;
@@ -43,6 +58,10 @@ export const readerMessages = {
   choice(where: string, got: string, choices: readonly string[]): string {
     return `${where} is "${got}", which is not one of ${choices.map((c) => `"${c}"`).join(', ')}: use one of those (any case)`;
   },
+  /** A choice given as something other than text (a data type); `got` names it. */
+  choiceNotText(where: string, got: string, choices: readonly string[]): string {
+    return `${where} is ${got}, not one of the words ${choices.map((c) => `"${c}"`).join(', ')}: use one of those (any case)`;
+  },
   booleanExpected(where: string, got: string): string {
     return `${where} must be TRUE or FALSE but is ${got}`;
   },
@@ -55,7 +74,8 @@ export const readerMessages = {
   nonFiniteResult(fn: string): string {
     return `PHZ.${fn} gave a result that is not a finite number (a division by zero or an overflow): check the inputs for zero impedances, open circuits or zero voltages`;
   },
-  internal(fn: string, detail: string): string {
-    return `PHZ.${fn} could not compute this (${detail}); check the inputs, and report it if they are valid`;
+  /** Something that is not a PhzError escaped: the cell never shows its raw text (the console gets it). */
+  internal(fn: string): string {
+    return `PHZ.${fn} could not compute this (internal error): check the inputs, and report the formula if they are valid`;
   },
 };

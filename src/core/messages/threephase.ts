@@ -24,8 +24,14 @@ export const threePhaseMessages = {
   negativeMagnitude(name: string, value: number): string {
     return `${name} is ${value}: give a magnitude of 0 or more (use angle to turn the set)`;
   },
-  kvl(name: string, residual: string): string {
-    return `${name} does not sum to zero (V12 + V23 + V31 = ${residual}), so it cannot be a set of line-to-line voltages: check the angles (a positive-sequence set is V∠θ, V∠θ−120°, V∠θ+120°)`;
+  kvl(name: string, residual: string, percent: string): string {
+    return `${name} does not close: V12 + V23 + V31 = ${residual}, ${percent} % of their mean magnitude (up to 1 % is removed as rounding). Check the order V12, V23, V31, the angles (V∠θ, V∠θ−120°, V∠θ+120°) and that all are line-to-line`;
+  },
+  lineSetNotTriangle(name: string, big: string, others: string, value: number, sum: number): string {
+    return `${name}: ${big} = ${value} exceeds ${others} = ${sum}, so the three cannot close a triangle and are not the line voltages of one supply: check the readings (all three line-to-line, in one unit)`;
+  },
+  lineSetZero(name: string, which: string): string {
+    return `${name}: ${which} is 0, which leaves the angles of the set undefined: give the three measured line-to-line magnitudes, all above 0`;
   },
   deltaResonant:
     'the three delta impedances add up to 0 Ω (the branches resonate around the delta), so the star equivalent is unbounded: check the reactances',
@@ -74,8 +80,10 @@ export const threePhaseMessages = {
   networkSingular:
     'the delta load and line impedances resonate (the node equations are singular), so no finite solution exists: check the reactances',
   neutralWord(got: string): string {
-    return `neutral is "${got}": leave it blank or 0 for a solid neutral, give an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral`;
+    return `neutral is "${got}": give 0 (or leave the argument out) for a solid neutral, an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral`;
   },
+  neutralBlank:
+    'neutral refers to a blank cell: give 0 for a solid neutral, an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral (only a left-out argument means a solid neutral)',
   openNotAllowed(where: string): string {
     return `${where} is "open": only load impedances may be open here; give an impedance`;
   },
@@ -95,6 +103,9 @@ export const threePhaseMessages = {
   },
   harmonicDuplicate(order: number): string {
     return `harmonic order ${order} appears in more than one row: give each order once`;
+  },
+  zeroVoltageAngle(name: string, phase: number): string {
+    return `${name}, phase ${phase} is 0 V: the harmonic currents of phase ${phase} are referred to its voltage angle, which 0 V does not have; give the supply phase voltages, or leave the argument out for a balanced supply at 0°, −120°, +120°`;
   },
   negativePercent(name: string, value: number): string {
     return `${name} is ${value} %: give a percentage of 0 or more`;

@@ -3,7 +3,7 @@
  * sizing rules of IEC 60364-5-52 Annex E and NFPA 70 Art. 220.61.
  */
 import { PhzError } from '../errors';
-import { NOISE_REL, angleRad, magnitude, polar, type Phasor } from '../phasor';
+import { NOISE_REL, angleDeg, magnitude, polarDegParts, type Phasor } from '../phasor';
 import { threePhaseMessages as M } from '../messages/threephase';
 import type { Triple } from './types';
 
@@ -32,28 +32,52 @@ export interface NeutralRmsResult {
   readonly byOrder: ReadonlyArray<readonly [number, number]>;
 }
 
+/** Angles of the balanced positive-sequence supply, degrees: the default reference of the harmonics. */
+export const BALANCED_ANGLES_DEG: Triple<number> = [0, -120, 120];
+
 /**
  * rms neutral current of three phase currents given as fundamental phasors plus harmonic
- * contents. Phase k's harmonic h has magnitude p_k,h/100·|I_k| and angle h·θ_k (the
- * harmonic of a waveform shifted by θ at the fundamental is shifted by h·θ), so for a
- * balanced set the triplens (3, 9, 15 …) add in phase and the others cancel. The rms of
- * the sum of components at different frequencies is the root-sum-square of their rms
- * values (Parseval).
+ * contents. Phase k's harmonic h has magnitude p_k,h/100·|I_k| and angle h·φ_k, where φ_k
+ * is the angle of phase k's supply voltage (0°, −120°, +120° unless the voltages are given).
+ *
+ * Why the voltage and not the fundamental current: the harmonic currents of a non-linear
+ * load (rectifier, switch-mode supply) are drawn in step with the voltage waveform that
+ * feeds it, whatever the displacement of its fundamental (a rectifier's 3rd harmonic sits
+ * at 3 × its phase-voltage angle, plus a phase lag of its own that is the same on every
+ * phase for like loads, so it cannot change the magnitudes of the sums; common practice).
+ * Referred to the voltage, the triplens (3, 9, 15 …) of a balanced supply are in phase and add
+ * arithmetically — the most the neutral can carry for those magnitudes, the 3 × h × I basis
+ * of IEC 60364-5-52 Annex E. Referring them to h × the fundamental-current angle instead
+ * would let phases at different power factors partly cancel in the neutral, which they do
+ * not in practice: the unsafe side. The rms of the sum of components at different
+ * frequencies is the root-sum-square of their rms values (Parseval).
+ *
+ * `voltages`: the supply phase voltages (only their angles are used), or null for a
+ * balanced positive-sequence supply. Throws for a 0 V phase (no angle).
  */
-export function neutralRms(currents: Triple<Phasor>, harmonics: readonly Harmonic[]): NeutralRmsResult {
+export function neutralRms(currents: Triple<Phasor>, harmonics: readonly Harmonic[], voltages: Triple<Phasor> | null = null, name = 'phase_voltages'): NeutralRmsResult {
+  let phi: Triple<number> = BALANCED_ANGLES_DEG;
+  if (voltages) {
+    voltages.forEach((v, k) => {
+      if (v.re === 0 && v.im === 0) throw new PhzError(M.zeroVoltageAngle(name, k + 1));
+    });
+    phi = [angleDeg(voltages[0]), angleDeg(voltages[1]), angleDeg(voltages[2])];
+  }
   const fundamental = currents[0].add(currents[1]).add(currents[2]);
   const scale = magnitude(currents[0]) + magnitude(currents[1]) + magnitude(currents[2]);
   const snap = (x: number): number => (x <= NOISE_REL * scale ? 0 : x);
   const f = snap(magnitude(fundamental));
   let sumSq = f * f;
   const byOrder: Array<readonly [number, number]> = [];
+  const part = { re: 0, im: 0 };
   for (const h of harmonics) {
     let re = 0;
     let im = 0;
     for (let k = 0; k < 3; k++) {
-      const z = polar((h.percent[k] / 100) * magnitude(currents[k]), h.order * angleRad(currents[k]));
-      re += z.re;
-      im += z.im;
+      // h·φ reduced to one turn first (exact in binary), so multiples of 15° stay exact
+      polarDegParts((h.percent[k] / 100) * magnitude(currents[k]), (h.order * phi[k]) % 360, part);
+      re += part.re;
+      im += part.im;
     }
     const m = snap(Math.hypot(re, im));
     byOrder.push([h.order, m]);

@@ -5,7 +5,7 @@
  * phase 1; operator a = 1∠120°. Line voltages V12 = V1 − V2, V23 = V2 − V3, V31 = V3 − V1.
  */
 import { PhzError } from '../errors';
-import { A2_OP, A_OP, ZERO, magnitude, type Phasor } from '../phasor';
+import { A2_OP, A_OP, NOISE_REL, ZERO, magnitude, polarDeg, radToDeg, type Phasor } from '../phasor';
 import { formatPolar } from '../format';
 import { threePhaseMessages as M } from '../messages/threephase';
 import { OPEN, isOpen, isZeroish, type Impedance, type Triple } from './types';
@@ -25,30 +25,92 @@ export function lineVoltages(phase: Triple<Phasor>): Triple<Phasor> {
   return [phase[0].sub(phase[1]), phase[1].sub(phase[2]), phase[2].sub(phase[0])];
 }
 
-/** Relative KVL tolerance for line voltages typed or pasted at 6 significant figures. */
-export const KVL_REL = 1e-4;
+/**
+ * The largest closure residual |V12 + V23 + V31| accepted, relative to the mean line-voltage
+ * magnitude: typed values at 4 figures leave about 0.1 %, meter readings at 0.1° resolution
+ * about 0.7 %; a set that misses by more is not one supply's line voltages.
+ */
+export const LINE_CLOSE_REL = 0.01;
 
 /**
- * Checks V12 + V23 + V31 = 0 within KVL_REL of the largest magnitude; every real set of
- * line-to-line voltages closes (Kirchhoff's voltage law around the three lines).
+ * Line voltages that close. Line-to-line voltages of any three-wire point sum to zero
+ * (Kirchhoff's voltage law around the three lines), so a residual s = V12 + V23 + V31 up to
+ * LINE_CLOSE_REL of the mean magnitude is rounding of typed or metered values, and is
+ * removed by taking s/3 from each value: that drops the zero-sequence part, which line
+ * voltages cannot have, and leaves the positive- and negative-sequence parts as given.
+ * A residual below the noise rule returns the set unchanged; above the limit, an error
+ * with the residual and what to check.
  */
-export function checkLineSet(line: Triple<Phasor>, name: string): void {
+export function closeLineSet(line: Triple<Phasor>, name: string): Triple<Phasor> {
   const sum = line[0].add(line[1]).add(line[2]);
-  const scale = Math.max(magnitude(line[0]), magnitude(line[1]), magnitude(line[2]));
-  if (magnitude(sum) > KVL_REL * scale) {
-    throw new PhzError(M.kvl(name, formatPolar(sum, 4)));
+  const total = magnitude(line[0]) + magnitude(line[1]) + magnitude(line[2]);
+  const r = magnitude(sum);
+  if (r <= NOISE_REL * total) return line;
+  const mean = total / 3;
+  if (r > LINE_CLOSE_REL * mean) {
+    throw new PhzError(M.kvl(name, formatPolar(sum, 4), formatPercent((100 * r) / mean)));
   }
+  const third = sum.div(3);
+  return [line[0].sub(third), line[1].sub(third), line[2].sub(third)];
+}
+
+function formatPercent(p: number): string {
+  return p >= 1000 ? p.toExponential(2) : String(Number(p.toPrecision(3)));
 }
 
 /**
  * The star (phase) set with the given line voltages and no zero-sequence part:
- * V1 = (V12 − V31)/3, V2 = (V23 − V12)/3, V3 = (V31 − V23)/3. Throws when the line set
- * does not close.
+ * V1 = (V12 − V31)/3, V2 = (V23 − V12)/3, V3 = (V31 − V23)/3. The line set must close
+ * (closeLineSet); its zero-sequence residual cancels in these differences.
  */
 export function starVoltages(line: Triple<Phasor>, name = 'line_set'): Triple<Phasor> {
-  checkLineSet(line, name);
-  const [v12, v23, v31] = line;
-  return [v12.sub(v31).div(3), v23.sub(v12).div(3), v31.sub(v23).div(3)];
+  return starOfClosedLineSet(closeLineSet(line, name));
+}
+
+/**
+ * Interior angle (radians) of a triangle with sides x, y, z, opposite z. Kahan's
+ * formulation ("Miscalculating Area and Angles of a Needle-like Triangle", 2014, §3), accurate
+ * for needle-like and degenerate triangles where acos of the law of cosines loses its digits;
+ * NaN when the sides cannot close (the caller checks that first).
+ */
+function angleOpposite(z: number, x: number, y: number): number {
+  const a = Math.max(x, y);
+  const b = Math.min(x, y);
+  let mu: number;
+  if (b >= z) mu = z - (a - b);
+  else mu = b - (a - z);
+  mu = Math.max(mu, 0);
+  const num = (a - b + z) * mu;
+  const den = (a + (b + z)) * (a - z + b);
+  return 2 * Math.atan(Math.sqrt(num / den));
+}
+
+/**
+ * The closed line-voltage set with the measured magnitudes |V12|, |V23|, |V31| (the
+ * triangle of the law of cosines), positive sequence (V23 lags V12), V12 at `angleDeg`
+ * (30° by default, so the set is LINEVOLTS of phase voltages at 0°, −120°, +120°). With γ
+ * the triangle's angle between V12 and V23 and β the angle opposite V23:
+ * V23 = |V23|∠(θ − 180° + γ), V31 = |V31|∠(θ + 180° − β). Magnitudes must be above 0 and
+ * close a triangle (none exceeds the sum of the other two, within rounding); a degenerate
+ * triangle gives a collinear set.
+ */
+export function lineSetFromMagnitudes(m: Triple<number>, angleDeg = 30, name = 'magnitudes'): Triple<Phasor> {
+  const labels = ['V12', 'V23', 'V31'] as const;
+  for (let k = 0; k < 3; k++) {
+    if (m[k] < 0) throw new PhzError(M.negativeMagnitudeValue(`${name}: ${labels[k]}`, m[k]));
+    if (m[k] === 0) throw new PhzError(M.lineSetZero(name, labels[k]));
+  }
+  for (let k = 0; k < 3; k++) {
+    const others = m[(k + 1) % 3] + m[(k + 2) % 3];
+    if (m[k] > others * (1 + NOISE_REL)) {
+      const names = [labels[(k + 1) % 3], labels[(k + 2) % 3]].sort();
+      throw new PhzError(M.lineSetNotTriangle(name, labels[k], names.join(' + '), m[k], Number(others.toPrecision(12))));
+    }
+  }
+  const [a, b, c] = m;
+  const gamma = radToDeg(angleOpposite(c, a, b));
+  const beta = radToDeg(angleOpposite(b, c, a));
+  return [polarDeg(a, angleDeg % 360), polarDeg(b, (angleDeg - 180 + gamma) % 360), polarDeg(c, (angleDeg + 180 - beta) % 360)];
 }
 
 /** Star set from line voltages without the closure check (inputs known to close). */

@@ -11,6 +11,13 @@
  * and I_k = (E_k − V_N'N)·Y_k, I_N = Σ I_k (flowing from N' to N). Limits are solved
  * exactly rather than approximated: a 0 Ω branch pins N' to that branch's EMF, an open
  * branch has Y = 0.
+ *
+ * Stiff networks (impedances many orders of magnitude apart, as when 1e9 Ω stands for an
+ * open and 1e-9 Ω for a short) keep their digits: E_k − V_N'N is never formed as a
+ * difference of two nearly equal potentials but as the algebraically equal
+ *   E_k − V_N'N = (E_k·Y_N + Σ_j (E_k − E_j)·Y_j) / (Σ Y_j + Y_N),
+ * which needs only differences of the source EMFs; the current of an impedant neutral is
+ * V_N'N·Y_N and that of an open neutral exactly 0, not the sum of the line currents.
  */
 import { PhzError } from '../errors';
 import { ZERO, magnitudeOf, rect, type Phasor } from '../phasor';
@@ -58,8 +65,11 @@ const OPEN_B = 0;
 const SHORT_B = 1;
 const ADMIT_B = 2;
 
-/** Solves a star load; throws PhzError for short circuits, all-open loads and resonance. */
-export function solveStar(input: StarInput): StarSolution {
+/**
+ * Solves a star load; throws PhzError for short circuits, all-open loads and resonance
+ * (`resonance` is the message, so the delta solver can word it for its own network).
+ */
+export function solveStar(input: StarInput, resonance: string = M.resonance): StarSolution {
   const { sources: e, loads, lines, neutral } = input;
   if (isOpen(loads[0]) && isOpen(loads[1]) && isOpen(loads[2])) throw new PhzError(M.allOpen('load impedances'));
 
@@ -111,54 +121,94 @@ export function solveStar(input: StarInput): StarSolution {
 
   const er = [e[0].re, e[1].re, e[2].re];
   const ei = [e[0].im, e[1].im, e[2].im];
-  // star-point shift V_N'N (Millman), or pinned by a 0 Ω branch
+  const eMax = Math.max(magnitudeOf(er[0], ei[0]), magnitudeOf(er[1], ei[1]), magnitudeOf(er[2], ei[2]));
+  // star-point shift V = V_N'N, and u_k = E_k − V, the voltage across branch k (line + load)
   let vr = 0;
   let vi = 0;
+  const ur = [0, 0, 0];
+  const ui = [0, 0, 0];
   if (nKind === SHORT_B) {
-    // solid neutral: V_N'N = 0
+    // solid neutral: V = 0
+    for (let k = 0; k < 3; k++) {
+      ur[k] = er[k];
+      ui[k] = ei[k];
+    }
   } else if (first >= 0) {
+    // a 0 Ω branch pins the star point to its EMF; the others see exact differences of EMFs
     vr = er[first];
     vi = ei[first];
+    for (let k = 0; k < 3; k++) {
+      const dr = er[k] - vr;
+      const di = ei[k] - vi;
+      // a difference below 1e-12 of the EMFs is rounding noise: that branch carries nothing
+      if (k === first || magnitudeOf(dr, di) <= ZERO_REL * eMax) continue;
+      ur[k] = dr;
+      ui[k] = di;
+    }
   } else {
     let nr = 0;
     let ni = 0;
     let dr = ynr;
     let di = yni;
     let scale = magnitudeOf(ynr, yni);
+    let nScale = 0;
     for (let k = 0; k < 3; k++) {
       if (kind[k] !== ADMIT_B) continue;
       nr += er[k] * yr[k] - ei[k] * yi[k];
       ni += er[k] * yi[k] + ei[k] * yr[k];
       dr += yr[k];
       di += yi[k];
-      scale += magnitudeOf(yr[k], yi[k]);
+      const y = magnitudeOf(yr[k], yi[k]);
+      scale += y;
+      nScale += magnitudeOf(er[k], ei[k]) * y;
     }
     const d2 = dr * dr + di * di;
-    if (d2 === 0 || Math.sqrt(d2) <= ZERO_REL * scale) throw new PhzError(M.resonance);
-    vr = (nr * dr + ni * di) / d2;
-    vi = (ni * dr - nr * di) / d2;
-    // a balanced set leaves only rounding noise of a³ = 1 in binary
-    const eScale = Math.max(magnitudeOf(er[0], ei[0]), magnitudeOf(er[1], ei[1]), magnitudeOf(er[2], ei[2]));
-    if (magnitudeOf(vr, vi) <= ZERO_REL * eScale) {
-      vr = 0;
-      vi = 0;
+    if (d2 === 0 || Math.sqrt(d2) <= ZERO_REL * scale) throw new PhzError(resonance);
+    // a balanced set on a balanced load leaves Σ E_k·Y_k as rounding noise of a³ = 1 in
+    // binary: below 1e-12 of its terms it is 0 (judged on the sum itself, not on V against
+    // the EMFs, so a stiff neutral's small but real shift is kept)
+    const balanced = magnitudeOf(nr, ni) <= ZERO_REL * nScale;
+    if (!balanced) {
+      vr = (nr * dr + ni * di) / d2;
+      vi = (ni * dr - nr * di) / d2;
+    }
+    for (let k = 0; k < 3; k++) {
+      if (balanced) {
+        ur[k] = er[k];
+        ui[k] = ei[k];
+        continue;
+      }
+      // u_k = E_k − V = (E_k·Y_N + Σ_j (E_k − E_j)·Y_j) / D: built from differences of the EMFs,
+      // never from E_k and V, which agree to every digit when branch k is far stiffer than
+      // the rest (a 1e-9 Ω phase beside 1e9 Ω ones); the two forms are equal algebraically
+      let pr = er[k] * ynr - ei[k] * yni;
+      let pi = er[k] * yni + ei[k] * ynr;
+      let size = magnitudeOf(er[k], ei[k]) * magnitudeOf(ynr, yni);
+      for (let j = 0; j < 3; j++) {
+        if (j === k || kind[j] !== ADMIT_B) continue;
+        const xr = er[k] - er[j];
+        const xi = ei[k] - ei[j];
+        pr += xr * yr[j] - xi * yi[j];
+        pi += xr * yi[j] + xi * yr[j];
+        size += magnitudeOf(xr, xi) * magnitudeOf(yr[j], yi[j]);
+      }
+      // below 1e-12 of its terms the sum is rounding noise (equal EMFs on a floating star point)
+      if (magnitudeOf(pr, pi) <= ZERO_REL * size) continue;
+      ur[k] = (pr * dr + pi * di) / d2;
+      ui[k] = (pi * dr - pr * di) / d2;
     }
   }
 
-  // line currents I_k = (E_k − V)·Y_k; a difference below 1e-12 of the EMFs is rounding noise
-  // (e.g. equal EMFs on a floating star point), so that branch carries exactly nothing
-  const eMax = Math.max(magnitudeOf(er[0], ei[0]), magnitudeOf(er[1], ei[1]), magnitudeOf(er[2], ei[2]));
+  // line currents I_k = u_k·Y_k
   const ir = [0, 0, 0];
   const ii = [0, 0, 0];
   for (let k = 0; k < 3; k++) {
     if (kind[k] !== ADMIT_B) continue;
-    const ur = er[k] - vr;
-    const ui = ei[k] - vi;
-    if (magnitudeOf(ur, ui) <= ZERO_REL * eMax) continue;
-    ir[k] = ur * yr[k] - ui * yi[k];
-    ii[k] = ur * yi[k] + ui * yr[k];
+    ir[k] = ur[k] * yr[k] - ui[k] * yi[k];
+    ii[k] = ur[k] * yi[k] + ui[k] * yr[k];
   }
-  // neutral flow N' → N through Z_N
+  // neutral flow N' → N: V·Y_N through an impedance (not the sum of the line currents, which
+  // cancels when the loads are far stiffer than the neutral), none when open
   const fr = nKind === ADMIT_B ? vr * ynr - vi * yni : 0;
   const fi = nKind === ADMIT_B ? vr * yni + vi * ynr : 0;
   if (first >= 0) {
@@ -174,12 +224,16 @@ export function solveStar(input: StarInput): StarSolution {
     ii[first] = fi - oi;
   }
 
-  let inr = ir[0] + ir[1] + ir[2];
-  let ini = ii[0] + ii[1] + ii[2];
-  const iScale = magnitudeOf(ir[0], ii[0]) + magnitudeOf(ir[1], ii[1]) + magnitudeOf(ir[2], ii[2]);
-  if (magnitudeOf(inr, ini) <= ZERO_REL * iScale) {
-    inr = 0;
-    ini = 0;
+  let inr = fr;
+  let ini = fi;
+  if (nKind === SHORT_B) {
+    inr = ir[0] + ir[1] + ir[2];
+    ini = ii[0] + ii[1] + ii[2];
+    const iScale = magnitudeOf(ir[0], ii[0]) + magnitudeOf(ir[1], ii[1]) + magnitudeOf(ir[2], ii[2]);
+    if (magnitudeOf(inr, ini) <= ZERO_REL * iScale) {
+      inr = 0;
+      ini = 0;
+    }
   }
 
   const currents: Phasor[] = [];
@@ -194,20 +248,20 @@ export function solveStar(input: StarInput): StarSolution {
   for (let k = 0; k < 3; k++) {
     const z = loads[k];
     // the voltage across the load impedance; an open load has the whole E_k − V across it
-    let ur: number;
-    let ui: number;
+    let wr: number;
+    let wi: number;
     if (isOpen(z)) {
-      ur = er[k] - vr;
-      ui = ei[k] - vi;
+      wr = ur[k];
+      wi = ui[k];
     } else {
-      ur = ir[k] * z.re - ii[k] * z.im;
-      ui = ir[k] * z.im + ii[k] * z.re;
+      wr = ir[k] * z.re - ii[k] * z.im;
+      wi = ir[k] * z.im + ii[k] * z.re;
     }
     // S = U·I*
-    const pr = ur * ir[k] + ui * ii[k];
-    const pi = ui * ir[k] - ur * ii[k];
+    const pr = wr * ir[k] + wi * ii[k];
+    const pi = wi * ir[k] - wr * ii[k];
     currents.push(rect(ir[k], ii[k]));
-    voltages.push(rect(ur, ui));
+    voltages.push(rect(wr, wi));
     powers.push(rect(pr, pi));
     tr += pr;
     ti += pi;

@@ -2,11 +2,14 @@
  * Unbalance factors, in percent.
  *
  * - VUF (IEC 61000-4-30; the IEC Electropedia term "voltage unbalance factor"): |V−|/|V+|·100.
+ *   IEEE Std 1159 defines voltage unbalance by the same sequence ratio (from memory).
  * - ZERO: |V0|/|V+|·100 (zero-sequence unbalance, phase quantities).
  * - LVUR (NEMA MG 1, "percent unbalance"): the maximum deviation of the three line-voltage
  *   magnitudes from their average, over the average.
- * - PVUR (the IEEE phase-voltage definition, as in IEEE Std 1159 and IEEE Std 112 — the latter
- *   from memory): the same on phase magnitudes.
+ * - PVUR (phase voltage unbalance rate, IEEE Std 112, test procedure for polyphase induction
+ *   motors and generators — from memory): the same on phase magnitudes. Von Jouanne and
+ *   Banerjee, "Assessment of Voltage Unbalance", IEEE Trans. Power Delivery 16(4), 2001,
+ *   discuss these definitions side by side.
  * - MAG (IEC 61000-4-30, the magnitude-only formula for three-wire systems):
  *   u2 = √((1 − √(3 − 6β)) / (1 + √(3 − 6β)))·100, β = ΣU⁴/(ΣU²)².
  */

@@ -229,6 +229,18 @@ export function STARVOLTS(line_set: any[][], digits?: any): any[][] {
 }
 
 /**
+ * A closed set of line-to-line voltages V12, V23, V31 from their three measured magnitudes (law of cosines).
+ * @customfunction LINESET
+ * @param {any[][]} magnitudes Measured magnitudes |V12|, |V23|, |V31|: three numbers above 0, in a row or a column.
+ * @param {any} [angle] Angle of V12 in degrees (default 30).
+ * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
+ * @returns {any[][]} A 3×1 column of polar text: V12, V23, V31.
+ */
+export function LINESET(magnitudes: any[][], angle?: any, digits?: any): any[][] {
+  return invoke('LINESET', [magnitudes, angle, digits]);
+}
+
+/**
  * Star impedances Z1, Z2, Z3 equivalent to delta branches Z12, Z23, Z31 (Kennelly).
  * @customfunction DELTATOSTAR
  * @param {any[][]} z12 Branch Z12 (between lines 1 and 2), or a range of three: Z12, Z23, Z31. "open" for a missing branch.
@@ -318,7 +330,7 @@ export function POWERFACTOR(power: any[][]): any[][] {
  * @customfunction STARLOAD
  * @param {any[][]} phase_voltages Source phase voltages E1, E2, E3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} impedances Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.
- * @param {any[][]} [neutral] Blank or 0 = solid neutral (default); an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral.
+ * @param {any[][]} [neutral] Left out or 0 = solid neutral; an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral. Not a blank cell.
  * @param {any[][]} [line] Line impedance: one for every line, or three (default none).
  * @param {any} [labels] TRUE adds a header row and a label column (default FALSE).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
@@ -369,10 +381,11 @@ export function NEUTRAL120(i1: any[][], i2?: any[][], i3?: any[][]): any[][] {
  * @customfunction NEUTRALRMS
  * @param {any[][]} currents Fundamental phase currents I1, I2, I3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any[][]} harmonics Rows of [order, percent] or [order, p1, p2, p3]; order a whole number ≥ 2, percent ≥ 0.
+ * @param {any[][]} [phase_voltages] Supply phase voltages V1, V2, V3: the harmonics follow their angles (default a balanced set at 0°, −120°, +120°).
  * @returns {any[][]} A number: the rms neutral current (same unit as the currents).
  */
-export function NEUTRALRMS(currents: any[][], harmonics: any[][]): any[][] {
-  return invoke('NEUTRALRMS', [currents, harmonics]);
+export function NEUTRALRMS(currents: any[][], harmonics: any[][], phase_voltages?: any[][]): any[][] {
+  return invoke('NEUTRALRMS', [currents, harmonics, phase_voltages]);
 }
 
 /**

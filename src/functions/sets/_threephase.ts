@@ -88,9 +88,14 @@ export function readLineImpedances(arg: unknown, name = 'line'): Triple<Phasor> 
   return zs;
 }
 
-/** The STARLOAD neutral: blank or 0 → solid; "open" → none; an impedance → impedant. */
+/**
+ * The STARLOAD neutral: left out, 0 or "solid" → solid; "open" → none; an impedance →
+ * impedant. A reference to a blank cell is an error, never a silent solid neutral: the
+ * host passes null for a left-out argument but [[null]] or [[""]] for a blank cell.
+ */
 export function readNeutral(arg: unknown): Neutral {
-  if (isOmitted(arg)) return { kind: 'solid' };
+  if (isAbsent(arg)) return { kind: 'solid' };
+  if (isOmitted(arg)) throw new PhzError(M.neutralBlank);
   const m = asMatrix(arg);
   if (m.length === 1 && m[0].length === 1 && typeof m[0][0] === 'string') {
     const t = m[0][0].trim().toLowerCase();

@@ -16,10 +16,15 @@ export const DELTALOAD = defineFunction({
   details:
     'Without line impedances each branch sees its line voltage: I12 = V12/Z12 and so on, and the line currents follow ' +
     'from Kirchhoff’s current law at the corners: I1 = I12 − I31, I2 = I23 − I12, I3 = I31 − I23. With line impedances ' +
-    'the network is solved exactly by nodal analysis of the three load corners, fed by the star set with the same line ' +
-    'voltages (a three-wire load draws no zero-sequence current, so the source’s zero sequence cannot matter). A branch ' +
+    'the network is solved exactly, fed by the star set with the same line voltages (a three-wire load draws no ' +
+    'zero-sequence current, so the source’s zero sequence cannot matter): line currents from the star equivalent of ' +
+    'the delta, each branch current from whichever exact relation keeps its digits (the divider around the delta, or ' +
+    'Ohm’s law on the corner voltage), so impedances many orders apart (1e9 Ω standing for an open, 1e-6 Ω for a ' +
+    'short) lose no accuracy; a delta whose impedances sum to about 0 Ω is solved by nodal analysis. A branch ' +
     'may be "open". Row k: line current I_k, branch current I_k(k+1) (I12, I23, I31), voltage across that branch ' +
-    'impedance, and its complex power V·I*. The line voltages must close: V12 + V23 + V31 = 0.',
+    'impedance, and its complex power V·I*. Line voltages physically sum to zero: a residual V12 + V23 + V31 up to 1 % ' +
+    'of their mean magnitude (rounded or metered values) is removed by taking a third of it from each (dropping the ' +
+    'zero-sequence part, which line voltages cannot have); a larger one is an error. For magnitudes only, use LINESET.',
   params: [
     phasorParam('line_voltages', 'Line-to-line voltages V12, V23, V31 (three)'),
     { name: 'impedances', type: 'matrix', description: 'Branch impedances Z12, Z23, Z31 (three, or one for all); "open" for a missing branch.' },
@@ -29,7 +34,7 @@ export const DELTALOAD = defineFunction({
   ],
   result: 'A 3×4 table of polar text (4×5 with labels): row k [I_k, I_k(k+1), V_branch, S_branch].',
   errors: [
-    'Other than three line voltages, other than one or three impedances, or line voltages that do not sum to zero give #VALUE!.',
+    'Other than three line voltages, other than one or three impedances, or line voltages whose sum is more than 1 % of their mean magnitude give #VALUE!.',
     'A 0 Ω branch with no line impedance, or lines joined through 0 Ω elements, short-circuits the supply: #VALUE!.',
     'All three branches "open", or a resonant network (no finite solution), give #VALUE!.',
   ],

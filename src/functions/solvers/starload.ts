@@ -16,8 +16,11 @@ export const STARLOAD = defineFunction({
   summary: 'Solves a star (wye) load fed from a star source: line currents, load voltages and powers, neutral current, star-point shift.',
   details:
     'Exact for every case by Millman’s theorem with the line and neutral admittances: V_N′N = Σ E_k·Y_k / (Σ Y_k + Y_N), ' +
-    'Y_k = 1/(Z_k + ZL_k), then I_k = (E_k − V_N′N)·Y_k. neutral blank or 0 = solid neutral (V_N′N = 0); an impedance = ' +
-    'impedant neutral; "open" = three-wire, the star point floats. A load impedance may be "open" (a disconnected ' +
+    'Y_k = 1/(Z_k + ZL_k), then I_k = (E_k − V_N′N)·Y_k, with E_k − V_N′N formed from differences of the EMFs so that ' +
+    'impedances many orders apart (1e9 Ω standing for an open, 1e-9 Ω for a short) lose no accuracy. neutral left ' +
+    'out, 0 or "solid" = solid neutral (V_N′N = 0); an impedance = impedant neutral; "open" = three-wire, the star ' +
+    'point floats. A neutral that refers to a blank cell is an error: an input not yet filled in is never taken ' +
+    'as a solid neutral. A load impedance may be "open" (a disconnected ' +
     'phase). Rows 1–3 are phases 1–3: line current, voltage across the load impedance (terminal to star point), load ' +
     'complex power V·I*. Row 4: neutral current from the load star point to the source neutral (= I1 + I2 + I3), the ' +
     'star-point shift V_N′N, and the total load complex power (line and neutral losses excluded). Units are whatever ' +
@@ -25,7 +28,7 @@ export const STARLOAD = defineFunction({
   params: [
     phasorParam('phase_voltages', 'Source phase voltages E1, E2, E3 (three)'),
     { name: 'impedances', type: 'matrix', description: 'Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.' },
-    { name: 'neutral', type: 'matrix', optional: true, description: 'Blank or 0 = solid neutral (default); an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral.' },
+    { name: 'neutral', type: 'matrix', optional: true, description: 'Left out or 0 = solid neutral; an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral. Not a blank cell.' },
     { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },
     { name: 'labels', type: 'scalar', optional: true, description: 'TRUE adds a header row and a label column (default FALSE).' },
     DIGITS,
@@ -35,7 +38,7 @@ export const STARLOAD = defineFunction({
     'Other than three phase voltages, or other than one or three impedances, gives #VALUE!.',
     'A 0 Ω phase (load + line) with a solid neutral, or two 0 Ω phases, short-circuits the source: #VALUE!.',
     'All three loads "open", or admittances that sum to zero at the star point (series resonance), give #VALUE!.',
-    'An unknown neutral word, a blank cell or text that is not a phasor gives #VALUE!.',
+    'An unknown neutral word, a neutral that refers to a blank cell, or a blank cell or text that is not a phasor elsewhere gives #VALUE!.',
   ],
   examples: [
     {

@@ -27,11 +27,13 @@ export const UNBALANCE = defineFunction({
   group: 'unbalance',
   summary: 'Unbalance of three voltages (or currents) in percent: VUF (default), ZERO, LVUR, PVUR or MAG.',
   details:
-    'VUF: |negative sequence| / |positive sequence| × 100 (the voltage unbalance factor of IEC 61000-4-30), ' +
-    'from phasors — line or phase values give the same result. ZERO: |zero| / |positive| × 100, ' +
+    'VUF: |negative sequence| / |positive sequence| × 100 (the voltage unbalance factor of IEC 61000-4-30; IEEE Std ' +
+    '1159 also defines unbalance by this sequence ratio), from phasors — line or phase values give the same result. ' +
+    'ZERO: |zero| / |positive| × 100, ' +
     'from phase values. LVUR: the largest deviation of the three line-voltage magnitudes from their average, over ' +
-    'the average × 100 (NEMA MG 1 "percent unbalance"). PVUR: the same on phase magnitudes (the IEEE definition, ' +
-    'e.g. IEEE Std 1159). MAG: the IEC 61000-4-30 formula from the three line-voltage magnitudes only, ' +
+    'the average × 100 (NEMA MG 1 "percent unbalance"). PVUR: the same on phase magnitudes (the phase voltage ' +
+    'unbalance rate of IEEE Std 112, the test procedure for polyphase induction motors). MAG: the IEC 61000-4-30 ' +
+    'formula from the three line-voltage magnitudes only, ' +
     'u2 = √((1 − √(3 − 6β))/(1 + √(3 − 6β))) × 100 with β = ΣU⁴/(ΣU²)² — equal to VUF for a three-wire supply. ' +
     'LVUR, PVUR and MAG accept plain numbers (magnitudes); VUF and ZERO need phasors.',
   params: [

@@ -3,6 +3,7 @@ import { polarDeg, rect, magnitude, angleDeg, type Phasor } from '../../../src/c
 import { OPEN, balancedSet, deltaToStar, lineVoltages, solveDelta, solveStar, type Triple } from '../../../src/core/threephase';
 import { expectClose, expectPhasorClose, expectPhzError } from '../../helpers';
 import { referenceDelta } from './reference';
+import { bigDelta } from './bigref';
 
 const V400: Triple<Phasor> = lineVoltages(balancedSet(polarDeg(400 / Math.sqrt(3), -30)));
 
@@ -79,13 +80,52 @@ describe('solveDelta — cases', () => {
   });
 });
 
+describe('solveDelta — routes with line impedances', () => {
+  const zl: Triple<Phasor> = [rect(0.5, 0.2), rect(0.4, 0.3), rect(0.6, 0.1)];
+  const v = lineVoltages([polarDeg(240, 3), polarDeg(226, -117), polarDeg(234, 121)]);
+  it.each([
+    ['a resonant delta (Z12 + Z23 + Z31 = 0: no star equivalent, nodal route)', [rect(0, 10), rect(0, 10), rect(0, -20)]],
+    ['a delta within 1e-6 of resonance (nodal route)', [rect(0, 10), rect(0, 10), rect(0, -20.000001)]],
+    ['a delta near resonance (star-equivalent route)', [rect(0, 10), rect(0, 10), rect(0, -20.01)]],
+    ['a delta with a 0 Ω branch', [rect(0), rect(30, 12), rect(25, 5)]],
+  ] as const)('%s matches the 60-digit nodal reference', (_, z) => {
+    const s = solveDelta({ lineVoltages: v, loads: [...z] as unknown as Triple<Phasor>, lines: zl });
+    const ref = bigDelta([...v], z.map((x) => (x.re === 0 && x.im === 0 ? rect(1e-40) : x)), [...zl]);
+    for (let k = 0; k < 3; k++) {
+      expectPhasorClose(s.lineCurrents[k], ref.lineCurrents[k], 1e-9);
+      expectPhasorClose(s.branchCurrents[k], ref.branchCurrents[k], 1e-9);
+    }
+  });
+  it('one open branch: the other two carry the line currents at the corners they share with it; the gap sees the KVL remainder', () => {
+    const s = solveDelta({ lineVoltages: v, loads: [rect(30, 12), OPEN, rect(25, 5)], lines: zl });
+    const ref = bigDelta([...v], [rect(30, 12), 'open', rect(25, 5)], [...zl]);
+    for (let k = 0; k < 3; k++) {
+      expectPhasorClose(s.lineCurrents[k], ref.lineCurrents[k], 1e-12);
+      if (k !== 1) expectPhasorClose(s.branchCurrents[k], ref.branchCurrents[k], 1e-12);
+      expectPhasorClose(s.branchVoltages[k], ref.branchVoltages[k], 1e-12);
+    }
+    expect(magnitude(s.branchCurrents[1])).toBe(0);
+  });
+  it('two open branches: one series circuit, I = V12/(Z12 + ZL1 + ZL2) by Ohm’s law', () => {
+    const z = rect(30, 12);
+    const s = solveDelta({ lineVoltages: v, loads: [z, OPEN, OPEN], lines: zl });
+    const i = v[0].div(z.add(zl[0]).add(zl[1]));
+    expectPhasorClose(s.branchCurrents[0], i, 1e-14);
+    expectPhasorClose(s.lineCurrents[0], i, 1e-14);
+    expectPhasorClose(s.lineCurrents[1], i.neg(), 1e-14);
+    expect(magnitude(s.lineCurrents[2])).toBe(0);
+    const ref = bigDelta([...v], [z, 'open', 'open'], [...zl]);
+    for (let k = 0; k < 3; k++) expectPhasorClose(s.branchVoltages[k], ref.branchVoltages[k], 1e-12);
+  });
+});
+
 describe('solveDelta — bad networks', () => {
   const zl: Triple<Phasor> = [rect(0), rect(0), rect(0.5)];
   it.each([
     ['a 0 Ω branch with no line impedance', () => solveDelta({ lineVoltages: V400, loads: [rect(10), rect(0), rect(10)], lines: null }), /branch 23 is 0 Ω with no line impedance/],
     ['a 0 Ω branch between two lines of 0 Ω', () => solveDelta({ lineVoltages: V400, loads: [rect(0), rect(10), rect(10)], lines: zl }), /lines 1 and 2 of the supply are joined through 0 Ω/],
     ['all branches open', () => solveDelta({ lineVoltages: V400, loads: [OPEN, OPEN, OPEN], lines: null }), /all three branch impedances are "open"/],
-    ['line voltages that do not close', () => solveDelta({ lineVoltages: [polarDeg(400, 0), polarDeg(400, -120), polarDeg(400, 100)], loads: [rect(10), rect(10), rect(10)], lines: null }), /line_voltages does not sum to zero/],
+    ['line voltages that do not close', () => solveDelta({ lineVoltages: [polarDeg(400, 0), polarDeg(400, -120), polarDeg(400, 100)], loads: [rect(10), rect(10), rect(10)], lines: null }), /line_voltages does not close/],
     ['a resonant network', () => solveDelta({ lineVoltages: V400, loads: [rect(0, -2), OPEN, OPEN], lines: [rect(0, 1), rect(0, 1), rect(0, 1)] }), /resonate/],
   ])('rejects %s', (_, f, msg) => {
     expect(expectPhzError(f).message).toMatch(msg);

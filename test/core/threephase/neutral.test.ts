@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { polarDeg, magnitude } from '../../../src/core/phasor';
+import * as math from 'mathjs';
+import { angleRad, polarDeg, magnitude, rect } from '../../../src/core/phasor';
 import { balancedSet, neutral120, neutralDemand, neutralRms, sizingCurrent } from '../../../src/core/threephase';
 import { expectClose, expectPhzError } from '../../helpers';
 
@@ -35,12 +36,65 @@ describe('neutralRms', () => {
     expect(r.byOrder.find(([h]) => h === 7)?.[1]).toBe(0);
     expectClose(r.rms, Math.hypot(90, 24));
   });
-  it('unbalanced contents: each phase’s harmonic is at h × its fundamental angle', () => {
+  it('unbalanced contents: each phase’s harmonic is at h × its phase-voltage angle (0°, −120°, +120° by default)', () => {
     const i = [polarDeg(50, 10), polarDeg(40, -115), polarDeg(30, 128)] as const;
     const r = neutralRms(i, [{ order: 3, percent: [20, 30, 10] }]);
-    const h3 = polarDeg(10, 30).add(polarDeg(12, -345)).add(polarDeg(3, 384));
-    expectClose(r.byOrder[0][1], magnitude(h3));
-    expectClose(r.rms, Math.hypot(magnitude(i[0].add(i[1]).add(i[2])), magnitude(h3)));
+    // balanced supply: 3 × 0°, 3 × −120°, 3 × 120° are all 0°, so the third harmonics add arithmetically
+    expectClose(r.byOrder[0][1], 10 + 12 + 3);
+    expectClose(r.rms, Math.hypot(magnitude(i[0].add(i[1]).add(i[2])), 25));
+  });
+  // The independent review's case (issue 8 §1): phases at pf 0.95, 1.0 and 0.8 with 40 % third harmonic.
+  const MIXED_PF = [polarDeg(20, -18.19), polarDeg(20, -120), polarDeg(20, 83.13)] as const;
+  it('phases at different power factors: the third harmonics still add in the neutral (IEC 60364-5-52:2009 Annex E basis, 3 × h × I)', () => {
+    const r = neutralRms(MIXED_PF, [{ order: 3, percent: [40, 40, 40] }]);
+    // IEC 60364-5-52 Annex E takes the neutral current as 3 × the third-harmonic content × the line current
+    // (the clause E.52 examples, from memory): 3 × 0.40 × 20 A = 24 A, whatever the displacement power factors
+    expectClose(r.byOrder[0][1], 3 * 0.4 * 20, 1e-12);
+    // fundamental: the phasor sum, computed here with mathjs (an independent complex library)
+    const fund = math.abs(
+      math.add(math.add(math.complex({ r: 20, phi: (-18.19 * Math.PI) / 180 }), math.complex({ r: 20, phi: (-120 * Math.PI) / 180 })), math.complex({ r: 20, phi: (83.13 * Math.PI) / 180 })) as math.Complex,
+    ) as unknown as number;
+    expectClose(r.rms, Math.hypot(fund, 24), 1e-12);
+    expectClose(r.rms, 26.8243, 1e-5); // √(11.98² + 24²) ≈ 26.82 A, the review's figure
+  });
+  it('equals the rms of the summed waveforms sampled over one cycle (time-domain check, independent of the phasor sums)', () => {
+    const harmonics = [
+      { order: 3, percent: [40, 35, 45] as const },
+      { order: 5, percent: [20, 25, 15] as const },
+      { order: 9, percent: [8, 6, 10] as const },
+    ];
+    const v = [polarDeg(231, 0), polarDeg(226, -121), polarDeg(229, 119)] as const;
+    const r = neutralRms(MIXED_PF, harmonics, v);
+    // i_N(t) = Σ_k √2·|I_k|·cos(ωt + θ_k) + Σ_h Σ_k √2·p/100·|I_k|·cos(h(ωt + φ_k)), φ_k the phase-voltage angles;
+    // N equally spaced samples of a trigonometric polynomial of degree < N/2 give its mean square exactly
+    const n = 4096;
+    let sumSq = 0;
+    for (let s = 0; s < n; s++) {
+      const wt = (2 * Math.PI * s) / n;
+      let iN = 0;
+      for (let k = 0; k < 3; k++) {
+        const mag = magnitude(MIXED_PF[k]);
+        iN += Math.SQRT2 * mag * Math.cos(wt + angleRad(MIXED_PF[k]));
+        for (const h of harmonics) iN += Math.SQRT2 * (h.percent[k] / 100) * mag * Math.cos(h.order * (wt + angleRad(v[k])));
+      }
+      sumSq += iN * iN;
+    }
+    expectClose(r.rms, Math.sqrt(sumSq / n), 1e-12);
+  });
+  it('supply voltages given: only their angles count (a 10 V and a 400 V set at the same angles agree)', () => {
+    const h = [{ order: 3, percent: [30, 30, 30] as const }];
+    const a = neutralRms(MIXED_PF, h, [polarDeg(10, 5), polarDeg(10, -118), polarDeg(10, 121)]);
+    const b = neutralRms(MIXED_PF, h, [polarDeg(400, 5), polarDeg(400, -118), polarDeg(400, 121)]);
+    expectClose(a.rms, b.rms, 1e-14);
+    // third harmonics at 15°, −354°, 363°: 6 A each, computed by hand with mathjs
+    const third = math.abs(
+      math.add(math.add(math.complex({ r: 6, phi: (15 * Math.PI) / 180 }), math.complex({ r: 6, phi: (-354 * Math.PI) / 180 })), math.complex({ r: 6, phi: (363 * Math.PI) / 180 })) as math.Complex,
+    ) as unknown as number;
+    expectClose(a.byOrder[0][1], third, 1e-12);
+  });
+  it('rejects a 0 V supply phase (its angle is undefined)', () => {
+    const err = expectPhzError(() => neutralRms(MIXED_PF, [{ order: 3, percent: [30, 30, 30] }], [polarDeg(230, 0), rect(0), polarDeg(230, 120)]));
+    expect(err.message).toMatch(/phase_voltages, phase 2 is 0 V/);
   });
 });
 

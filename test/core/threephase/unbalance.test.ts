@@ -6,7 +6,7 @@ import { expectClose, expectPhzError } from '../../helpers';
 describe('maxDeviation (LVUR / PVUR)', () => {
   it.each([
     // [source, magnitudes, published percent, relative tolerance of the published rounding]
-    ['IEEE Std 1159 voltage-imbalance example: 230, 232, 225 V → 1.7 %', [230, 232, 225], 1.7, 0.03],
+    ['IEEE Std 112 phase-voltage definition (PVUR, from memory) applied by hand: 230, 232, 225 V → 4/229 = 1.747 %', [230, 232, 225], 1.7467, 1e-4],
     ['NEMA MG 1 (Part 14, unbalanced voltages) example: 460, 467, 450 V → 1.96 % (from memory)', [460, 467, 450], 1.96, 0.001],
     ['industrialmonitordirect.com, NEMA MG1 limits: 480, 476, 472 V → 0.84 %', [480, 476, 472], 0.84, 0.002],
     ['eng-tips.com thread 481112, NEMA definition: 462, 463, 455 V → 1.1 %', [462, 463, 455], 1.1, 0.02],

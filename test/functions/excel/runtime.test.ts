@@ -156,6 +156,30 @@ describe('errors, as Excel receives them', () => {
     expect(o).toEqual({ ok: false, errorCode: RUNTIME_ERROR.invalidValue, message: GENERIC_MESSAGE });
   });
 
+  it('reads cells holding Excel data types as Excel sends them (rich values, flag 8)', async () => {
+    // Shapes from the Office docs, "Excel data types core concepts" (FormattedNumber, Double)
+    // and "Use data types with custom functions in Excel" (entities); the runtime unwraps each
+    // {value: JSON} before calling the function.
+    const rich = (v: object) => ({ value: JSON.stringify(v) });
+    const volts = rich({ type: 'FormattedNumber', basicValue: 230, numberFormat: '0 "V"' });
+    const load = rich({
+      type: 'Entity',
+      text: 'Heater branch',
+      properties: { Real: { type: 'Double', basicValue: 8.2 }, Imag: { type: 'Double', basicValue: 3.1 } },
+    });
+    const pictured = rich({ type: 'WebImage', address: 'https://example.org/board.png' });
+    const [ok, refused] = await runtime.invoke([
+      { functionName: 'DIV', parameterValues: [[[volts]], [[load]], null], flags: 8 },
+      { functionName: 'MAG', parameterValues: [[[pictured]]], flags: 8 },
+    ]);
+    expect(ok).toEqual({ ok: true, value: [['26.2365∠-20.709°']] });
+    expect(refused.ok).toBe(false);
+    if (!refused.ok) {
+      expect(refused.errorCode).toBe(RUNTIME_ERROR.invalidValue);
+      expect(refused.message).toMatch(/image/);
+    }
+  });
+
   it('treats null for a left-out optional argument as omitted', async () => {
     const [a, b] = await runtime.invoke([
       { functionName: 'TOPOLAR', parameterValues: [[['3+j4']], null] },

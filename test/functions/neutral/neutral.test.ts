@@ -98,6 +98,34 @@ describe('PHZ.NEUTRALRMS', () => {
   ])('domain error %#', (table, msg) => {
     expectMessage(() => call('NEUTRALRMS', IBAL, table), msg);
   });
+  it('phases at different power factors (issue 8 §1): 40 % third harmonic gives 3 × 0.4 × 20 A = 24 A in the neutral (IEC 60364-5-52:2009 Annex E basis)', () => {
+    const i = col('20∠-18.19', '20∠-120', '20∠83.13');
+    // fundamental sum 11.9809 A (phasor sum, mathjs-checked in the core test); √(11.9809² + 24²)
+    expectClose(call('NEUTRALRMS', i, [[3, 40]])[0][0] as number, Math.hypot(11.980942576853790, 24), 1e-12);
+  });
+  it('documented example: phase 3 at pf 0.5 lagging — fundamental sum 40 A and 3 × 0.25 × 40 A = 30 A of third harmonic give 50 A (IEC 60364-5-52 Annex E basis)', () => {
+    // 40∠0 + 40∠−120 + 40∠60 = 40∠0 (by hand); √(40² + 30²) = 50
+    expectClose(call('NEUTRALRMS', col('40∠0', '40∠-120', '40∠60'), [[3, 25]])[0][0] as number, 50, 1e-12);
+  });
+  it('phase_voltages: the supply the harmonics are referred to; a balanced set equals leaving it out, a range or pair block works', () => {
+    const i = col('20∠-18.19', '20∠-120', '20∠83.13');
+    const h = [[3, 40, 30, 20], [5, 10, 10, 10]];
+    const omitted = call('NEUTRALRMS', i, h)[0][0] as number;
+    expectClose(call('NEUTRALRMS', i, h, col('230∠0', '230∠-120', '230∠120'))[0][0] as number, omitted, 1e-14);
+    expectClose(call('NEUTRALRMS', i, h, [['400∠0', '400∠-120', '400∠120']])[0][0] as number, omitted, 1e-14);
+    // the third harmonics of a supply with phase 2 at −124°: 8 A ∠0°, 6 A ∠−372°, 4 A ∠360° (mathjs-free: by hand)
+    const skew = call('NEUTRALRMS', i, [[3, 40, 30, 20]], col('230∠0', '226∠-124', '229∠120'))[0][0] as number;
+    const re = 8 + 6 * Math.cos((-372 * Math.PI) / 180) + 4;
+    const im = 6 * Math.sin((-372 * Math.PI) / 180);
+    expectClose(skew, Math.hypot(11.980942576853790, Math.hypot(re, im)), 1e-9);
+  });
+  it('phase_voltages: a blank, a 0 V phase, two values or a current are errors naming it', () => {
+    const i = col('20∠-18.19', '20∠-120', '20∠83.13');
+    expectMessage(() => call('NEUTRALRMS', i, [[3, 40]], col('230', '', '230∠120')), /phase_voltages, row 2 is blank/);
+    expectMessage(() => call('NEUTRALRMS', i, [[3, 40]], col('230', 0, '230∠120')), /phase_voltages, phase 2 is 0 V/);
+    expectMessage(() => call('NEUTRALRMS', i, [[3, 40]], col('230', '230∠-120')), /phase_voltages holds 2 values but needs three/);
+    expectMessage(() => call('NEUTRALRMS', i, [[3, 40]], col('230', '10 A', '230∠120')), /phase_voltages, row 2/);
+  });
   it('carries the sizing cautions', () => {
     expect(specByName.NEUTRALRMS.cautions?.join(' ')).toMatch(/competent, licensed person/);
   });

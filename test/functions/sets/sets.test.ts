@@ -1,3 +1,4 @@
+import * as math from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { polarDeg, rect, magnitude, angleDeg } from '../../../src/core/phasor';
 import { expectClose, expectPhasorClose } from '../../helpers';
@@ -84,7 +85,23 @@ describe('PHZ.STARVOLTS', () => {
     expectMessage(() => call('STARVOLTS', col(1, 2, 3, 4)), /line_set holds 4 values but needs three/);
   });
   it('domain error: line voltages that do not sum to zero', () => {
-    expectMessage(() => call('STARVOLTS', col('400∠30', '400∠-90', '400∠140')), /line_set does not sum to zero/);
+    expectMessage(() => call('STARVOLTS', col('400∠30', '400∠-90', '400∠140')), /line_set does not close/);
+  });
+  it('meter readings at 0.1° resolution that miss closing by 0.7 % are accepted: the result is the zero-sequence-free set (mathjs)', () => {
+    const texts = ['401.2∠30.0', '398.7∠-90.4', '399.5∠149.8'];
+    const r = phs(call('STARVOLTS', col(...texts), 15));
+    // V1 = (V12 − V31)/3 and so on, computed with mathjs from the readings as typed
+    const v = texts.map((t) => {
+      const [m, a] = t.split('∠').map(Number);
+      return math.complex({ r: m, phi: (a * Math.PI) / 180 });
+    });
+    const want = [0, 1, 2].map((k) => math.divide(math.subtract(v[k], v[(k + 2) % 3]), 3) as math.Complex);
+    for (let k = 0; k < 3; k++) expectPhasorClose(r[k], want[k], 1e-13);
+  });
+  it('accepts LINEVOLTS output shown at 4 figures', () => {
+    const r = phs(call('STARVOLTS', call('LINEVOLTS', col('231∠0', '226∠-121', '229∠119'), 4), 15));
+    const exact = phs(call('STARVOLTS', call('LINEVOLTS', col('231∠0', '226∠-121', '229∠119'), 15), 15));
+    for (let k = 0; k < 3; k++) expectPhasorClose(r[k], exact[k], 1e-3);
   });
   it('inverts LINEVOLTS for an unbalanced set without zero sequence', () => {
     const x = [polarDeg(240, 2), polarDeg(221, -117), rect(0)];
@@ -92,6 +109,53 @@ describe('PHZ.STARVOLTS', () => {
     const y = x.map((z) => z.sub(zero));
     const r = phs(call('STARVOLTS', call('LINEVOLTS', col(...y.map((z) => `${z.re}+j${z.im}`)), 15), 15));
     for (let k = 0; k < 3; k++) expectPhasorClose(r[k], y[k], 1e-12);
+  });
+});
+
+describe('PHZ.LINESET', () => {
+  it('normal use: equal magnitudes give the balanced line set with V12 at 30°, which STARVOLTS turns into phases at 0°, −120°, +120°', () => {
+    const r = phs(call('LINESET', col(400, 400, 400), null, 15));
+    expectPhasorClose(r[0], polarDeg(400, 30), 1e-15);
+    expectPhasorClose(r[1], polarDeg(400, -90), 1e-15);
+    expectPhasorClose(r[2], polarDeg(400, 150), 1e-15);
+    const e = phs(call('STARVOLTS', call('LINESET', col(400, 400, 400), null, 15), 15));
+    expectPhasorClose(e[0], polarDeg(400 / Math.sqrt(3), 0), 1e-14);
+  });
+  it('the 3-4-5 right triangle (Euclid I.48; law of cosines: cos γ = (9 + 16 − 25)/24 = 0): V23 is 90° behind V12', () => {
+    const r = phs(call('LINESET', col(300, 400, 500), 0, 15));
+    expectPhasorClose(r[1], polarDeg(400, -90), 1e-15);
+    // V31 = −(V12 + V23), with mathjs
+    const v31 = math.unaryMinus(math.add(math.complex(300, 0), math.complex(0, -400))) as math.Complex;
+    expectPhasorClose(r[2], v31, 1e-14);
+  });
+  it('meter magnitudes 402, 395, 385 V: the set closes, DELTALOAD takes it, and its VUF equals the IEC 61000-4-30 magnitude formula', () => {
+    const set = call('LINESET', col(402, 395, 385), null, 15);
+    const r = phs(set);
+    expect(magnitude(r[0].add(r[1]).add(r[2]))).toBeLessThan(1e-12 * 400);
+    expectClose(call('UNBALANCE', set)[0][0] as number, call('UNBALANCE', col(402, 395, 385), 'MAG')[0][0] as number, 1e-12);
+    expect(call('DELTALOAD', set, 40, '0.1').length).toBe(3);
+  });
+  it('range input: a row of three, numeric text, and an angle from a 1×1 range', () => {
+    const r = phs(call('LINESET', [[402, '395', 385]], [[0]], 15));
+    expectClose(magnitude(r[1]), 395, 1e-14);
+    expectClose(angleDeg(r[0]), 0);
+  });
+  it('blank cell: a blank magnitude is an error; a blank angle is the default 30°', () => {
+    expectMessage(() => call('LINESET', col(400, null, 400)), /magnitudes, row 2 is blank/);
+    expectClose(angleDeg(ph(call('LINESET', col(400, 400, 400), '', 15)[0][0])), 30);
+  });
+  it('wrong type: a phasor text, TRUE', () => {
+    expectMessage(() => call('LINESET', col(400, '400∠-120', 400)), /magnitudes, row 2/);
+    expectMessage(() => call('LINESET', col(400, 400, 400), true), /angle/);
+  });
+  it('wrong count: two magnitudes, four magnitudes', () => {
+    expectMessage(() => call('LINESET', col(400, 400)), /magnitudes holds 2 values but needs three/);
+    expectMessage(() => call('LINESET', col(400, 400, 400, 400)), /magnitudes holds 4 values but needs three/);
+  });
+  it('domain errors: no triangle, a zero, a negative magnitude', () => {
+    expectMessage(() => call('LINESET', col(400, 100, 200)), /V12 = 400 exceeds V23 \+ V31 = 300, so the three cannot close a triangle/);
+    expectMessage(() => call('LINESET', col(400, 0, 400)), /magnitudes: V23 is 0/);
+    expectMessage(() => call('LINESET', col(-400, 400, 400)), /magnitudes: V12 is -400: a magnitude cannot be negative/);
   });
 });
 

@@ -1,3 +1,4 @@
+import * as math from 'mathjs';
 import { describe, expect, it } from 'vitest';
 import { polarDeg, rect, magnitude, angleDeg } from '../../../src/core/phasor';
 import { expectClose, expectPhasorClose } from '../../helpers';
@@ -49,6 +50,13 @@ describe('PHZ.STARLOAD', () => {
     }
     expectPhasorClose(ph(t1[3][1]), ref.shift, 1e-12);
   });
+  it('stiff network (issue 8 §6): 1e-9 Ω beside two 1e9 Ω phases, open neutral → I1 = 1.9053e-5∠0° A and no neutral current (by hand: I1 = −(I2 + I3) = 3·6351 V/1e9 Ω)', () => {
+    const t = call('STARLOAD', call('BALANCED', 6351), col('1e-9', '1e9', '1e9'), 'open');
+    expect(t[0][0]).toBe('0.000019053∠0°');
+    expect(t[3][0]).toBe('0');
+    const t15 = call('STARLOAD', call('BALANCED', 6351), col('1e-9', '1e9', '1e9'), 'open', null, null, 15);
+    expectPhasorClose(ph(t15[0][0]), rect((3 * 6351) / 1e9), 1e-12);
+  });
   it('labels TRUE adds a header row and a label column (5×4)', () => {
     const t = call('STARLOAD', E, col(23, 46, 23), null, null, true);
     expect(t.length).toBe(5);
@@ -63,6 +71,17 @@ describe('PHZ.STARLOAD', () => {
   it('blank cell: a blank voltage or impedance is an error naming it', () => {
     expectMessage(() => call('STARLOAD', col('230∠0', '', '230∠120'), col(1, 2, 3)), /phase_voltages, row 2 is blank/);
     expectMessage(() => call('STARLOAD', E, col(1, null, 3)), /impedances, row 2 is blank/);
+  });
+  it('neutral: only a left-out argument means a solid neutral; a blank cell is an error asking for 0, an impedance or "open"', () => {
+    const solid = call('STARLOAD', E, col(23, 46, 23), 0);
+    // the host passes null for a left-out argument (undefined when the call is shorter)
+    expect(call('STARLOAD', E, col(23, 46, 23), null)).toEqual(solid);
+    expect(call('STARLOAD', E, col(23, 46, 23))).toEqual(solid);
+    expect(call('STARLOAD', E, col(23, 46, 23), 'solid')).toEqual(solid);
+    // a referenced blank cell arrives as [[null]] or [[""]]; whitespace-only text is blank too
+    for (const blank of [[[null]], [['']], [['  ']], [[null], [null]]]) {
+      expectMessage(() => call('STARLOAD', E, col(23, 46, 23), blank), /^neutral refers to a blank cell: give 0 for a solid neutral, an impedance .* or "open" for no neutral/);
+    }
   });
   it('wrong type: an unknown neutral word, a current where an impedance belongs, non-boolean labels', () => {
     expectMessage(() => call('STARLOAD', E, col(1, 2, 3), 'floating'), /neutral is "floating"/);
@@ -120,6 +139,35 @@ describe('PHZ.DELTALOAD', () => {
       expectPhasorClose(ph(t[k][1]), ref.branchCurrents[k], 1e-12);
     }
   });
+  it('line voltages rounded to 4 figures (LINEVOLTS(…, 4)) are accepted: the residual is removed, a third from each', () => {
+    const phases = col('231∠0', '226∠-121', '229∠119');
+    const z = col('30+j12', '45-j20', '25+j5');
+    const rounded = call('LINEVOLTS', phases, 4);
+    const t = call('DELTALOAD', rounded, z, null, null, 15);
+    // reference: the exact line voltages of the same phases, V12 = V1 − V2 … (mathjs), each branch I = V/Z
+    const v = ['231∠0', '226∠-121', '229∠119'].map((s) => {
+      const [m, a] = s.split('∠').map(Number);
+      return math.complex({ r: m, phi: (a * Math.PI) / 180 });
+    });
+    const zs = [math.complex(30, 12), math.complex(45, -20), math.complex(25, 5)];
+    for (let k = 0; k < 3; k++) {
+      const ib = math.divide(math.subtract(v[k], v[(k + 1) % 3]), zs[k]) as math.Complex;
+      expectPhasorClose(ph(t[k][1]), ib, 1e-3); // 4 figures in, about 1e-3 out
+    }
+    // the branch voltages are the rounded set less a third of its residual: they close
+    const vb = t.map((row) => ph(row[2]));
+    expect(magnitude(vb[0].add(vb[1]).add(vb[2]))).toBeLessThan(1e-12 * 400);
+    // with line impedances too
+    const tl = call('DELTALOAD', rounded, z, '0.2+j0.1', null, 15);
+    expect(tl.length).toBe(3);
+  });
+  it('stiff network (issue 8 §6): a balanced 1e7 Ω delta behind 1e-6 Ω lines draws three equal line currents, √3·V/Z (common practice)', () => {
+    const t = call('DELTALOAD', call('LINEVOLTS', call('BALANCED', 230)), '1e7', '1e-6', null, 15);
+    const m = t.map((row) => magnitude(ph(row[0])));
+    expect(Math.abs(m[1] / m[0] - 1)).toBeLessThanOrEqual(1e-12);
+    expect(Math.abs(m[2] / m[0] - 1)).toBeLessThanOrEqual(1e-12);
+    expectClose(m[0], (Math.sqrt(3) * 398.372) / 1e7, 1e-12);
+  });
   it('labels TRUE adds a header and a label column (4×5); an "open" branch', () => {
     const t = call('DELTALOAD', V, col(40, 'open', 40), null, true);
     expect(t[0]).toEqual(['', 'line current', 'branch current', 'branch voltage', 'branch power']);
@@ -136,6 +184,6 @@ describe('PHZ.DELTALOAD', () => {
   it('domain errors: a 0 Ω branch shorting the supply, all open, voltages that do not close', () => {
     expectMessage(() => call('DELTALOAD', V, col(10, 0, 10)), /branch 23 is 0 Ω with no line impedance, so lines 2 and 3 of the supply are short-circuited/);
     expectMessage(() => call('DELTALOAD', V, col('open', 'open', 'open')), /all three branch impedances are "open"/);
-    expectMessage(() => call('DELTALOAD', col('400∠0', '400∠-120', '400∠100'), col(1, 2, 3)), /line_voltages does not sum to zero/);
+    expectMessage(() => call('DELTALOAD', col('400∠0', '400∠-120', '400∠100'), col(1, 2, 3)), /line_voltages does not close/);
   });
 });

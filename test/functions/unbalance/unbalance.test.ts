@@ -1,13 +1,20 @@
 import { describe, expect, it } from 'vitest';
 import { expectClose } from '../../helpers';
+import { specByName } from '../../../src/functions';
 import { call, col, expectMessage } from '../sets/_cells';
 
 const num = (r: unknown[][]): number => r[0][0] as number;
 
 describe('PHZ.UNBALANCE', () => {
-  it('IEEE Std 1159 max-deviation example: 230, 232, 225 V → 1.7 % (PVUR)', () => {
-    expectClose(num(call('UNBALANCE', col(230, 232, 225), 'PVUR')), 1.7, 0.03);
-    expectClose(num(call('UNBALANCE', col(230, 232, 225), 'pvur')), (100 * 4) / 229);
+  it('PVUR by the IEEE Std 112 definition (phase voltage unbalance rate, from memory), applied by hand: 230, 232, 225 V → 4/229 = 1.747 %', () => {
+    expectClose(num(call('UNBALANCE', col(230, 232, 225), 'PVUR')), (100 * 4) / 229);
+    expectClose(num(call('UNBALANCE', col(230, 232, 225), 'pvur')), 1.7467, 1e-4);
+  });
+  it('details cite IEEE Std 112 for PVUR, and IEEE Std 1159 only for the sequence ratio', () => {
+    const details = specByName.UNBALANCE.details ?? '';
+    expect(details).toMatch(/PVUR: [^.]*IEEE Std 112/);
+    expect(details).not.toMatch(/PVUR: [^.]*1159/);
+    expect(details).toMatch(/IEEE Std 1159[^.]*(negative|sequence)/);
   });
   it('NEMA MG 1 example (from memory): 460, 467, 450 V → 1.96 % (LVUR)', () => {
     expectClose(num(call('UNBALANCE', col(460, 467, 450), 'LVUR')), 1.96, 1e-3);
