@@ -2,7 +2,8 @@
  * Worked sheet 4: delta load from its line-to-line voltages, with optional line
  * impedances, solved the way a hand calculation does it:
  *   1. the supply as the star set with the same line voltages and no zero sequence,
- *      Ek = (Vk(k+1) − V(k−1)k)/3 (a three-wire load draws no zero-sequence current);
+ *      Ek = (Vk(k+1) − V(k−1)k)/3 (a three-wire load draws no zero-sequence current; a small
+ *      closure residual of typed or metered values drops out here, as in PHZ.DELTALOAD);
  *   2. the delta as its star equivalent (Kennelly): Z1 = Z12·Z31/ΣZΔ …;
  *   3. the star equivalent plus the lines, star point floating (Millman) → line currents;
  *   4. the load corners' potentials Uk = Ek − Ik·ZLk, the branch voltages and currents.
@@ -13,6 +14,10 @@ import { functions } from '../../functions';
 import { F, PlanBuilder, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, column3, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
 import { K, agreement, lineFields, phasorInputs } from './star-common';
+import { LINE_CLOSE_REL } from '../../core/threephase/sets';
+
+/** |V12 + V23 + V31| over the mean line-voltage magnitude. */
+export const CLOSURE_RESIDUAL = `PHZ.MAG(${F.add('V_12', 'V_23', 'V_31')})/((PHZ.MAG(V_12)+PHZ.MAG(V_23)+PHZ.MAG(V_31))/3)`;
 
 const BR = ['12', '23', '31'] as const;
 /** Branch b joins corners (k, l): 12 → 1, 2; 23 → 2, 3; 31 → 3, 1. */
@@ -132,10 +137,9 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
   });
 
   b.section('One-call solver on the same inputs');
-  b.remark('The solver is given the closed line-voltage set of the equivalent star (steps 1–3), which is what the steps use.');
   const at = b.solverBlock(
     'PHZ.DELTALOAD',
-    `PHZ.DELTALOAD(PHZ.LINEVOLTS(${b.range('E_1', 'E_3')}, 15), ${b.range('Z_12', 'Z_31')}, ${b.range('Z_L1', 'Z_L3')}, FALSE, 15)`,
+    `PHZ.DELTALOAD(${b.range('V_12', 'V_31')}, ${b.range('Z_12', 'Z_31')}, ${b.range('Z_L1', 'Z_L3')}, FALSE, 15)`,
     ['line 1, branch 12', 'line 2, branch 23', 'line 3, branch 31'],
     ['line current', 'branch current', 'branch voltage', 'branch power'],
   );
@@ -144,9 +148,9 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
   b.check(
     'The line voltages close',
     'V12 + V23 + V31 = 0 (Kirchhoff’s voltage law around the lines)',
-    `PHZ.MAG(${F.add('V_12', 'V_23', 'V_31')})/MAX(PHZ.MAG(V_12), PHZ.MAG(V_23), PHZ.MAG(V_31))`,
-    1e-4,
-    'KVL; measured values typed to 6 figures close within 1e-4, the limit PHZ.DELTALOAD accepts',
+    CLOSURE_RESIDUAL,
+    LINE_CLOSE_REL,
+    'KVL; typed or metered values leave a small residual, which steps 1–3 drop (as PHZ.DELTALOAD does); residual over the mean magnitude',
   );
   K.forEach((k, i) => {
     const [out, back] = [BR[i], BR[(i + 2) % 3]];
@@ -175,7 +179,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
 
   b.cautions([
     ...COMMON_CAUTIONS,
-    'The line voltages must close (V12 + V23 + V31 = 0); measured values that do not are refused by PHZ.DELTALOAD. An open branch is not a finite impedance: use PHZ.DELTALOAD with "open" for it.',
+    'The line voltages must close (V12 + V23 + V31 = 0); a set that misses by more than 1 % is not one supply’s line voltages. An open branch is not a finite impedance: use PHZ.DELTALOAD with "open" for it.',
   ]);
   b.chartTitleIs('line voltages, line and branch currents');
   BR.forEach((br) => b.chartPhasor(`V${br}`, `V_${br}`, 'V'));

@@ -20,6 +20,8 @@ import { readNumber } from '../../functions/readers';
 import { F, PlanBuilder, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
 import { K, phasorInputs } from './star-common';
+import { CLOSURE_RESIDUAL } from './delta';
+import { LINE_CLOSE_REL } from '../../core/threephase/sets';
 
 const BR = ['12', '23', '31'] as const;
 
@@ -200,6 +202,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
   const mag = one('PHZ.UNBALANCE, MAG', `PHZ.UNBALANCE(${mag3}, "MAG")`);
   const pvur = one('PHZ.UNBALANCE, PVUR', `PHZ.UNBALANCE(${b.range('E_1', 'E_3')}, "PVUR")`);
   const seq = b.solverBlock('PHZ.SEQCOMP', `PHZ.SEQCOMP(${closed}, 15)`, ['zero', 'positive', 'negative'], ['component']);
+  const lineset = mags ? b.solverBlock('PHZ.LINESET, V12 at 0°', `PHZ.LINESET(${mag3}, 0, 15)`, ['V12', 'V23', 'V31'], ['phasor']) : null;
 
   b.section('Checks', 'checks');
   b.check(
@@ -207,10 +210,19 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
     'V12 + V23 + V31 = 0 (Kirchhoff’s voltage law around the lines)',
     mags
       ? `PHZ.MAG(${F.add('Vc_12', 'Vc_23', 'Vc_31')})/MAX(U_12, U_23, U_31)`
-      : `PHZ.MAG(${F.add('V_12', 'V_23', 'V_31')})/MAX(PHZ.MAG(V_12), PHZ.MAG(V_23), PHZ.MAG(V_31))`,
-    mags ? 1e-9 : 1e-4,
-    mags ? 'KVL; the law of cosines closes the triangle' : 'KVL; measured values typed to 6 figures close within 1e-4',
+      : CLOSURE_RESIDUAL,
+    mags ? 1e-9 : LINE_CLOSE_REL,
+    mags ? 'KVL; the law of cosines closes the triangle' : 'KVL; typed or metered values leave a small residual, removed as V0 (as PHZ.UNBALANCE and PHZ.STARVOLTS do); residual over the mean magnitude',
   );
+  if (lineset) {
+    b.check(
+      'The closed set agrees with PHZ.LINESET',
+      'V12c, V23c, V31c of the steps = the function’s',
+      `MAX(${BR.map((br, i) => `PHZ.MAG(${F.sub(`Vc_${br}`, lineset(i, 0))})`).join(', ')})/MAX(U_12, U_23, U_31)`,
+      1e-9,
+      'law of cosines two ways; largest difference over the largest magnitude',
+    );
+  }
   b.check(
     'VUF equals the magnitude formula',
     'VUF = u2 for a three-wire (closed) set',
@@ -253,7 +265,7 @@ export const unbalance: Calculation = {
   fields: FIELDS,
   crossCheck(values) {
     const col = BR.map((br) => [values[`V${br}`]]);
-    if (magnitudesOnly(values)) functions.UNBALANCE(col, 'MAG');
+    if (magnitudesOnly(values)) functions.LINESET(col, null, null);
     else functions.STARVOLTS(col, null);
   },
   plan,
