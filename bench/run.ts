@@ -2,6 +2,8 @@
  * `npm run bench`: speed figures, printed (not asserted). Targets (issues 2 and 3):
  * DIV on two text phasors ≤ 0.5× complex.js's own parse + divide + toString;
  * ADD over a 100,000-cell column of text phasors ≤ 30 ms; STARLOAD ≤ 5 µs per call.
+ * Worked sheets (issue 9): the largest sheet planned ≤ 1 ms and written into the preview
+ * ≤ 250 ms (our own targets: the pane should answer at once).
  *
  * Every case runs in a fresh node process (so one library's JIT state cannot help or
  * hurt another's), five times; the best batch of the best process is reported.
@@ -12,6 +14,7 @@ import { execFileSync } from 'node:child_process';
 import { functions } from '../src/functions';
 import { benchStarload } from './starload.bench';
 import { benchDeltaload } from './deltaload.bench';
+import { benchPlan, benchWrite, largest } from './sheets.bench';
 
 let sink = 0;
 
@@ -62,6 +65,8 @@ const CASES: Record<string, () => Promise<number> | number> = {
   },
   starload: async () => (await benchStarload()).nsPerCall,
   deltaload: async () => (await benchDeltaload()).nsPerCall,
+  sheetPlan: () => benchPlan(),
+  sheetWrite: () => benchWrite(),
 };
 
 function measure(name: string): number {
@@ -101,6 +106,11 @@ async function main(): Promise<void> {
   row('PHZ.STARLOAD (3-wire, line Z; parse, solve, format 4×3)', `${(star / 1000).toFixed(2)} µs`, star <= 5000 ? 'met (≤ 5 µs)' : 'NOT MET (≤ 5 µs)');
   const delta = measure('deltaload');
   row('PHZ.DELTALOAD (line Z; parse, solve, format 3×4)', `${(delta / 1000).toFixed(2)} µs`);
+  const big = largest();
+  const plan = measure('sheetPlan');
+  row(`Worked sheet: plan "${big.calc.name}" (${big.cells} cells)`, `${plan.toFixed(0)} µs`, plan <= 1000 ? 'met (≤ 1 ms)' : 'NOT MET (≤ 1 ms)');
+  const write = measure('sheetWrite');
+  row(`Worked sheet: write it into the preview (engine evaluates all)`, `${write.toFixed(1)} ms`, write <= 250 ? 'met (≤ 250 ms)' : 'NOT MET (≤ 250 ms)');
 }
 
 void main();
