@@ -26,6 +26,9 @@ const STYLE_OF: Partial<Record<CellRole, CellStyle>> = {
   symbol: 'symbol',
   label: 'label',
   unit: 'label',
+  // constants that are not inputs: a check's tolerance, the orders of a function's table
+  check: 'label',
+  value: 'label',
 };
 
 /** Writes `plan` to a new sheet (a free name made from `plan.sheetName`); never touches another sheet. */
