@@ -125,7 +125,8 @@ export const excelPort: WorkbookPort = {
       for (const n of plan.names) sheet.names.add(n.name, sheet.getRange(cellA1(n.row, n.col)), n.comment);
       const grid = planGrid(plan);
       const whole = sheet.getRange(`A1:${cellA1(grid.length - 1, grid[0].length - 1)}`);
-      // null leaves a cell as it is (empty on the new sheet), so spills have room
+      // null in a 2-D array leaves that cell as it is (Microsoft's "Blank and null values in
+      // Excel add-ins"): empty on the new sheet, so the one-call functions' spills have room
       whole.formulas = grid as unknown as string[][];
       for (const [row, first, last, role] of roleRuns(plan)) {
         const f = ROLE_FORMAT[role]!;

@@ -17,7 +17,7 @@ interface Recorder {
   added: string[];
   activated: string[];
   /** Every write, by sheet: which range and which property. */
-  writes: Array<{ sheet: string; address: string; what: string }>;
+  writes: Array<{ sheet: string; address: string; what: string; value?: unknown }>;
   names: Array<{ scope: string; name: string; address: string; comment: string }>;
   workbookNames: string[];
   newSheet?: any;
@@ -41,7 +41,7 @@ function rangeMock(rec: Recorder, sheet: string, address: string): any {
   const watch = (obj: any, prefix: string) =>
     new Proxy(obj, {
       set(o, p, v) {
-        rec.writes.push({ sheet, address, what: `${prefix}${String(p)}` });
+        rec.writes.push({ sheet, address, what: `${prefix}${String(p)}`, value: v });
         o[p] = v;
         return true;
       },
@@ -126,8 +126,8 @@ describe('Excel adapter: writing a worked sheet', () => {
     const grid = planGrid(plan);
     expect(contents[0].address).toBe(`A1:${cellA1(grid.length - 1, grid[0].length - 1)}`);
     // the block written holds exactly the plan's cells; the rest is null (left as it is)
-    const written = rec.newSheet && grid.flat().filter((v) => v !== null).length;
-    expect(written).toBe(plan.cells.length);
+    expect(contents[0].value).toEqual(grid);
+    expect((contents[0].value as unknown[][]).flat().filter((v) => v !== null)).toHaveLength(plan.cells.length);
   });
 
   it.each(plans)('%s: every name is scoped to the new sheet and none to the workbook', async (_name, plan) => {
