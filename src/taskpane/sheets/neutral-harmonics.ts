@@ -89,14 +89,14 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
     b.step({
       quantity: `Phase ${k} rms line current`,
       symbol: `I${k} rms`,
-      name: `I${k}_rms`,
+      name: `Irms_${k}`,
       relation: `I${k} rms = |I${k}| · √(1 + Σh (kh/100)²)`,
       formula: `PHZ.MAG(I_${k})*${distortion}`,
       unit: 'A',
       kind: 'number',
     }),
   );
-  b.step({ quantity: 'Design current (largest rms line current)', symbol: 'IB', relation: 'IB = max Ik rms', formula: 'MAX(I1_rms, I2_rms, I3_rms)', unit: 'A', kind: 'number' });
+  b.step({ quantity: 'Design current (largest rms line current)', symbol: 'IB', relation: 'IB = max Ik rms', formula: 'MAX(Irms_1, Irms_2, Irms_3)', unit: 'A', kind: 'number' });
   b.step({ quantity: 'Neutral over the largest line current', symbol: 'IN/IB', name: 'IN_ratio', relation: 'IN rms / IB', formula: 'IN_rms/I_B', unit: '', kind: 'number' });
   b.step({
     quantity: 'Reduction factor, Table E.52.1',

@@ -192,9 +192,12 @@ export function nameOf(symbol: string): string {
   return s.length === 1 ? `${s}_` : s.includes('_') ? s : `${s[0]}_${s.slice(1)}`;
 }
 
-/** True when `name` could be mistaken for a cell address (A1 up to XFD1048576, or R1C1). */
+/**
+ * True when `name` could be mistaken for a cell address (A1 up to XFD1048576, or R1C1), or
+ * begins with one (`I1_rms`): such names are refused by some hosts and read badly anyway.
+ */
 export function looksLikeAddress(name: string): boolean {
-  return /^[A-Za-z]{1,3}[0-9]+$/.test(name) || /^[Rr][0-9]*([Cc][0-9]*)?$/.test(name) || /^[Cc][0-9]*$/.test(name);
+  return /^[A-Za-z]{1,3}[0-9]+/.test(name) || /^[Rr][0-9]*([Cc][0-9]*)?$/.test(name) || /^[Cc][0-9]*$/.test(name);
 }
 
 // ------------------------------------------------------------------ formula pieces

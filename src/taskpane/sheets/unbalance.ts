@@ -163,7 +163,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
   b.step({
     quantity: 'Unbalance from the magnitudes only (IEC 61000-4-30)',
     symbol: 'u2',
-    name: 'u2_pct',
+    name: 'IEC_u2',
     relation: 'u2 = √((1 − √(3 − 6β)) / (1 + √(3 − 6β))) × 100',
     formula: 'SQRT((1-SQRT(3-6*beta_U))/(1+SQRT(3-6*beta_U)))*100',
     unit: '%',
@@ -226,14 +226,14 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
   b.check(
     'VUF equals the magnitude formula',
     'VUF = u2 for a three-wire (closed) set',
-    'ABS(VUF_pct-u2_pct)/MAX(VUF_pct, 1)',
+    'ABS(VUF_pct-IEC_u2)/MAX(VUF_pct, 1)',
     1e-9,
     'IEC 61000-4-30 (the formula is exact for line voltages); residual over VUF (at least 1 %)',
   );
   b.check(
     'Unbalance factors agree with PHZ.UNBALANCE',
     'VUF, LVUR, PVUR, u2 of the steps = the function’s',
-    `MAX(ABS(VUF_pct-${vuf}), ABS(LVUR_pct-${lvur}), ABS(PVUR_pct-${pvur}), ABS(u2_pct-${mag}))/MAX(VUF_pct, LVUR_pct, PVUR_pct, 1)`,
+    `MAX(ABS(VUF_pct-${vuf}), ABS(LVUR_pct-${lvur}), ABS(PVUR_pct-${pvur}), ABS(IEC_u2-${mag}))/MAX(VUF_pct, LVUR_pct, PVUR_pct, 1)`,
     1e-9,
     'largest difference over the largest factor (at least 1 %)',
   );

@@ -28,7 +28,7 @@ function reference(v: Values): Record<string, Expected> {
   }
   ref.IN_rms = Math.sqrt(sumSq);
   const rms = i.map((z) => abs(z) * Math.sqrt(distortion));
-  K.forEach((k, n) => (ref[`I${k}_rms`] = rms[n]));
+  K.forEach((k, n) => (ref[`Irms_${k}`] = rms[n]));
   const ib = Math.max(...rms);
   ref.I_B = ib;
   ref.IN_ratio = (ref.IN_rms as number) / ib;

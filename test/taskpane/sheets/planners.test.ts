@@ -215,7 +215,7 @@ describe('sheet names and sheet-scoped names', () => {
     expect(nameOf('VN')).toBe('V_N');
     expect(nameOf('pf1')).toBe('pf_1');
     expect(nameOf('P3')).toBe('P_3');
-    for (const bad of ['E1', 'Z1', 'ZN1', 'XFD1048576', 'R1C1', 'R', 'C', 'r2c']) expect(looksLikeAddress(bad), bad).toBe(true);
+    for (const bad of ['E1', 'Z1', 'ZN1', 'XFD1048576', 'R1C1', 'R', 'C', 'r2c', 'I1_rms', 'u2_pct']) expect(looksLikeAddress(bad), bad).toBe(true);
     for (const good of ['E_1', 'Z_L1', 'V_N', 'pf_1', 'J_sum']) expect(looksLikeAddress(good), good).toBe(false);
   });
 

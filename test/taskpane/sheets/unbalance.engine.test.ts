@@ -65,7 +65,7 @@ function reference(v: Values): Record<string, Expected> {
   const beta = u.reduce((s, x) => s + x ** 4, 0) / (s2 * s2);
   ref.beta_U = beta;
   const r = Math.sqrt(3 - 6 * beta);
-  ref.u2_pct = Math.sqrt((1 - r) / (1 + r)) * 100;
+  ref.IEC_u2 = Math.sqrt((1 - r) / (1 + r)) * 100;
   ref.k_derate = (ref.LVUR_pct as number) > 5 ? 'none: operation above 5 % not recommended' : motorDerate(ref.LVUR_pct as number);
   return ref;
 }
