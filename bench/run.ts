@@ -2,6 +2,8 @@
  * `npm run bench`: speed figures, printed (not asserted). Targets (issues 2 and 3):
  * DIV on two text phasors ≤ 0.5× complex.js's own parse + divide + toString;
  * ADD over a 100,000-cell column of text phasors ≤ 30 ms; STARLOAD ≤ 5 µs per call.
+ * Worked sheets (issue 9): the largest sheet planned ≤ 1 ms and written into the preview
+ * ≤ 250 ms (our own targets: the pane should answer at once).
  *
  * Every case runs in a fresh node process (so one library's JIT state cannot help or
  * hurt another's), five times; the best batch of the best process is reported.
@@ -13,6 +15,7 @@ import { functions } from '../src/functions';
 import { benchStarload } from './starload.bench';
 import { benchDeltaload } from './deltaload.bench';
 import { benchPlot1000, benchReplot50 } from './plot.bench';
+import { benchPlan, benchWrite, largest } from './sheets.bench';
 
 let sink = 0;
 
@@ -65,6 +68,8 @@ const CASES: Record<string, () => Promise<number> | number> = {
   deltaload: async () => (await benchDeltaload()).nsPerCall,
   plot1000: benchPlot1000,
   replot50: benchReplot50,
+  sheetPlan: () => benchPlan(),
+  sheetWrite: () => benchWrite(),
 };
 
 function measure(name: string): number {
@@ -108,6 +113,11 @@ async function main(): Promise<void> {
   row('Phasor plot: geometry + SVG text, 1,000 phasors', `${plot.toFixed(2)} ms`, plot <= 20 ? 'met (≤ 20 ms)' : 'NOT MET (≤ 20 ms)');
   const replot = measure('replot50');
   row('Phasor plot: re-plot of 50 phasors (read, lay out, SVG)', `${replot.toFixed(2)} ms`, replot <= 5 ? 'met (≤ 5 ms)' : 'NOT MET (≤ 5 ms)');
+  const big = largest();
+  const plan = measure('sheetPlan');
+  row(`Worked sheet: plan "${big.calc.name}" (${big.cells} cells)`, `${plan.toFixed(0)} µs`, plan <= 1000 ? 'met (≤ 1 ms)' : 'NOT MET (≤ 1 ms)');
+  const write = measure('sheetWrite');
+  row(`Worked sheet: write it into the preview (engine evaluates all)`, `${write.toFixed(1)} ms`, write <= 250 ? 'met (≤ 250 ms)' : 'NOT MET (≤ 250 ms)');
 }
 
 void main();

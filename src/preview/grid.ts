@@ -393,6 +393,10 @@ export class Grid {
         td.classList.toggle('runs-on', runsOn);
         const style = this.workbook.styleOf(this.sheet, r, c);
         if (style) td.classList.add(`s-${style}`);
+        // a styled label (a step number, a symbol such as J1 that also reads as a phasor) is no input
+        if (style && style !== 'input' && style !== 'scenario') td.classList.remove('k-input');
+        // a verdict that fails or exceeds a limit is shown as an alarm
+        if (style === 'verdict') td.classList.toggle('is-alarm', /^(FAIL|EXCEEDS|ABOVE|OVER)/.test(text));
         const edges = spills.find((s) => inRect(s, r, c));
         td.classList.toggle('sp-t', !!edges && edges.top === r);
         td.classList.toggle('sp-b', !!edges && edges.bottom === r);
@@ -406,8 +410,10 @@ export class Grid {
     this.paintedCols = w;
 
     let total = ROW_HEAD_PX;
+    const asked = this.workbook.columnWidths(this.sheet);
     for (let c = 0; c < this.cols; c++) {
-      const px = Math.round(Math.min(MAX_COL_PX, Math.max(MIN_COL_PX, 16 + widths[c] * CHAR_PX)));
+      const chars = asked[c] ?? widths[c];
+      const px = Math.round(Math.min(asked[c] ? 2 * MAX_COL_PX : MAX_COL_PX, Math.max(asked[c] ? 24 : MIN_COL_PX, 16 + chars * CHAR_PX)));
       total += px;
       const want = `${px}px`;
       if (this.colEls[c].style.width !== want) this.colEls[c].style.width = want;

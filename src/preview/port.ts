@@ -3,8 +3,19 @@
  * adapter implements, here against the preview grid and its engine.
  */
 import type { SelectionBlock } from '../taskpane/plot/model';
-import type { ActiveCell, PhasorChartRequest, PhasorChartResult, PlotRange, PlotSupport, SelectionChange, WorkbookPort } from '../taskpane/port';
+import type {
+  ActiveCell,
+  PhasorChartRequest,
+  PhasorChartResult,
+  PlotRange,
+  PlotSupport,
+  SelectionChange,
+  SheetWriteResult,
+  WorkbookPort,
+} from '../taskpane/port';
+import type { SheetPlan } from '../taskpane/sheets/plan';
 import { a1 } from './address';
+import { writePlanToWorkbook } from './sheets';
 import { rawToText } from './grid';
 import type { Grid } from './grid';
 import type { PreviewPlotPort } from './plot-port';
@@ -48,5 +59,17 @@ export class PreviewPort implements WorkbookPort {
     const sheet = this.grid.sheetName;
     this.workbook.setCell(sheet, pos.row, pos.col, formula, 'Insert function');
     this.grid.say(`Inserted into ${a1(pos)} from the reference.`);
+  }
+
+  sheetWritingBlocked(): string | null {
+    return null;
+  }
+
+  /** Writes the plan to a new sheet (one undoable step) and shows it. */
+  async writeSheetPlan(plan: SheetPlan): Promise<SheetWriteResult> {
+    const result = writePlanToWorkbook(this.workbook, plan);
+    this.grid.showSheet(result.sheet);
+    this.grid.say(`Worked sheet written by the pane: ${plan.title}. Amber cells are inputs; Ctrl+Z removes the sheet.`);
+    return result;
   }
 }

@@ -7,6 +7,7 @@
  */
 import type { RawCellContent, SimpleCellAddress } from 'hyperformula';
 import type { PhzEngine } from './engine';
+import { columnName } from './address';
 import type { Rect } from './address';
 
 interface CellChange {
@@ -18,14 +19,50 @@ interface CellChange {
 
 type Edit =
   | { readonly kind: 'cells'; readonly sheet: string; readonly changes: readonly CellChange[]; readonly label: string }
-  | { readonly kind: 'addSheet'; readonly sheet: string; readonly label: string };
+  | { readonly kind: 'addSheet'; readonly sheet: string; readonly label: string }
+  | { readonly kind: 'newSheet'; readonly content: SheetContent; readonly label: string };
 
 export type ChangeListener = () => void;
 
-/** Presentation hints for text cells (the engine holds no formatting). */
-export type CellStyle = 'title' | 'note' | 'heading';
+/**
+ * Presentation hints (the engine holds no formatting): `title`, `note`, `heading` for text;
+ * the rest are the roles of a worked sheet (`input` marks a value to edit, `verdict` a
+ * pass/fail cell, `chart` the place kept for a chart …).
+ */
+export type CellStyle =
+  | 'title'
+  | 'note'
+  | 'heading'
+  | 'subtitle'
+  | 'header'
+  | 'input'
+  | 'scenario'
+  | 'verdict'
+  | 'caution'
+  | 'chart'
+  | 'formulaText'
+  | 'symbol'
+  | 'label';
+
+/** A whole new sheet at once: cells from A1, styles, and names scoped to the sheet. */
+export interface SheetContent {
+  readonly name: string;
+  /** Raw contents from A1 (`null` for empty). */
+  readonly rows: RawCellContent[][];
+  readonly styles?: ReadonlyArray<{ readonly row: number; readonly col: number; readonly style: CellStyle }>;
+  /** Names scoped to the new sheet, each referring to one of its cells. */
+  readonly names?: ReadonlyArray<{ readonly name: string; readonly row: number; readonly col: number }>;
+  /** Column widths in characters from column A (the grid sizes the others to fit). */
+  readonly columnWidths?: readonly number[];
+}
+
+/** A sheet name as a formula reference: quoted, inner apostrophes doubled. */
+export function quoteSheet(name: string): string {
+  return `'${name.replace(/'/g, "''")}'`;
+}
 
 const UNDO_LIMIT = 200;
+
 
 function sameContent(a: RawCellContent, b: RawCellContent): boolean {
   const norm = (v: RawCellContent) => (v === undefined || v === '' ? null : v);
@@ -37,6 +74,7 @@ export class Workbook {
   private readonly redoStack: Edit[] = [];
   private readonly listeners = new Set<ChangeListener>();
   private readonly styles = new Map<string, CellStyle>();
+  private readonly widths = new Map<string, readonly number[]>();
 
   constructor(readonly engine: PhzEngine) {}
 
@@ -174,6 +212,41 @@ export class Workbook {
     return candidate;
   }
 
+  /**
+   * Adds a sheet named `content.name` (which must be free) with its cells, styles and
+   * sheet-scoped names (engine named expressions), as one undoable step. Names are
+   * defined before the cells are written, so formulas that use them resolve at once.
+   */
+  addSheetWith(content: SheetContent, label = 'Add sheet'): void {
+    if (this.hf.doesSheetExist(content.name)) throw new Error(`a sheet named ${content.name} already exists`);
+    this.writeNewSheet(content);
+    this.record({ kind: 'newSheet', content, label });
+    this.notify();
+  }
+
+  private writeNewSheet(content: SheetContent): void {
+    this.engine.change((hf) => {
+      hf.addSheet(content.name);
+      const id = this.sheetId(content.name);
+      for (const n of content.names ?? []) {
+        hf.addNamedExpression(n.name, `=${quoteSheet(content.name)}!$${columnName(n.col)}$${n.row + 1}`, id);
+      }
+      if (content.rows.length > 0) hf.setCellContents({ sheet: id, row: 0, col: 0 }, content.rows);
+    });
+    for (const s of content.styles ?? []) this.setStyle(content.name, s.row, s.col, s.style);
+    if (content.columnWidths) this.widths.set(content.name, content.columnWidths);
+  }
+
+  /** Column widths in characters a sheet asked for (from column A), or none. */
+  columnWidths(sheet: string): readonly number[] {
+    return this.widths.get(sheet) ?? [];
+  }
+
+  /** Names scoped to `sheet`. */
+  sheetNamesDefined(sheet: string): string[] {
+    return this.hf.listNamedExpressions(this.sheetId(sheet));
+  }
+
   canUndo(): boolean {
     return this.undoStack.length > 0;
   }
@@ -183,6 +256,11 @@ export class Workbook {
   }
 
   private apply(edit: Edit, direction: 'undo' | 'redo'): void {
+    if (edit.kind === 'newSheet') {
+      if (direction === 'undo') this.engine.change((hf) => hf.removeSheet(this.sheetId(edit.content.name)));
+      else this.writeNewSheet(edit.content);
+      return;
+    }
     if (edit.kind === 'addSheet') {
       if (direction === 'undo') this.engine.change((hf) => hf.removeSheet(this.sheetId(edit.sheet)));
       else this.engine.change((hf) => hf.addSheet(edit.sheet));

@@ -4,6 +4,7 @@
  * through the WorkbookPort, so the same part runs in Excel and in the preview.
  */
 import type { WorkbookPort } from './port';
+import { sheetsPart } from './sheets/part';
 import { plotPart } from './plot/part';
 
 /** What a mounted part can be told; every member is optional. */
@@ -29,4 +30,4 @@ export interface PanePart {
 }
 
 /** The parts, in tab order after the function reference. */
-export const paneParts: readonly PanePart[] = [plotPart];
+export const paneParts: readonly PanePart[] = [sheetsPart, plotPart];

@@ -5,6 +5,8 @@
  * Later features extend it (writing worked sheets, reading a selection to plot).
  */
 import type { SelectionBlock } from './plot/model';
+import type { SheetPlan } from './sheets/plan';
+
 export interface ActiveCell {
   /** Name of the worksheet holding the active cell, e.g. `Sub-board`. */
   readonly sheet: string;
@@ -90,6 +92,16 @@ export interface PlotPort {
   insertPhasorChart(request: PhasorChartRequest): Promise<PhasorChartResult>;
 }
 
+/** What writing a worked sheet did, for the status line. */
+export interface SheetWriteResult {
+  /** The new sheet's name (it is now the active sheet). */
+  readonly sheet: string;
+  /** Cells written (constants and formulas). */
+  readonly cells: number;
+  /** Names defined, all scoped to the new sheet. */
+  readonly names: number;
+}
+
 export interface WorkbookPort extends PlotPort {
   /** Shown to the user, e.g. `Excel` or `Preview`. */
   readonly hostName: string;
@@ -97,4 +109,12 @@ export interface WorkbookPort extends PlotPort {
   getActiveCell(): Promise<ActiveCell>;
   /** Writes a formula (starting with `=`) into the active cell; results may spill. */
   setActiveCellFormula(formula: string): Promise<void>;
+  /**
+   * Worked sheets: writes `plan` to a NEW sheet (a free, valid name made from
+   * `plan.sheetName`), never over an existing sheet or cell, with its names scoped to that
+   * sheet, and activates it. Hosts without it cannot write sheets.
+   */
+  writeSheetPlan?(plan: SheetPlan): Promise<SheetWriteResult>;
+  /** Why this host cannot write worked sheets (e.g. a missing requirement set), or null when it can. */
+  sheetWritingBlocked?(): string | null;
 }

@@ -109,3 +109,40 @@ describe('cell text', () => {
     expect(isPhasorText(text)).toBe(yes);
   });
 });
+
+describe('workbook: a whole new sheet at once (worked sheets)', () => {
+  it('adds the sheet with its cells, styles and names scoped to it, as one undoable step', () => {
+    const { wb, engine } = book();
+    wb.addSheetWith(
+      {
+        name: "Tom's sheet",
+        rows: [['3+j4', '=PHZ.MAG(Z_a)'], [null, '=PHZ.MAG(A1)']],
+        styles: [{ row: 0, col: 0, style: 'input' }],
+        names: [{ name: 'Z_a', row: 0, col: 0 }],
+        columnWidths: [12, 30],
+      },
+      'Write sheet',
+    );
+    const id = wb.sheetId("Tom's sheet");
+    expect(engine.display({ sheet: id, row: 0, col: 1 })).toBe(5);
+    expect(wb.styleOf("Tom's sheet", 0, 0)).toBe('input');
+    expect(wb.sheetNamesDefined("Tom's sheet")).toEqual(['Z_a']);
+    expect(wb.columnWidths("Tom's sheet")).toEqual([12, 30]);
+    // the name is the new sheet's own: another sheet cannot use it
+    wb.setCell('S', 4, 0, '=PHZ.MAG(Z_a)');
+    expect(engine.display({ sheet: 0, row: 4, col: 0 })).toMatchObject({ error: '#NAME?' });
+    wb.setCell("Tom's sheet", 0, 0, '6+j8');
+    expect(engine.display({ sheet: id, row: 0, col: 1 })).toBe(10);
+    wb.undo();
+    wb.undo();
+    expect(wb.undo()).toBe('Write sheet');
+    expect(wb.sheetNames()).toEqual(['S']);
+    expect(wb.redo()).toBe('Write sheet');
+    expect(engine.display({ sheet: wb.sheetId("Tom's sheet"), row: 0, col: 1 })).toBe(5);
+  });
+
+  it('refuses a name that is taken', () => {
+    const { wb } = book();
+    expect(() => wb.addSheetWith({ name: 'S', rows: [] })).toThrow(/already exists/);
+  });
+});
