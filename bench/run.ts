@@ -57,7 +57,7 @@ const CASES: Record<string, () => Promise<number> | number> = {
   mathjs: () => nsPerCall(() => math.format(math.divide(math.complex('-115-199.186i'), math.complex('8+6i'))), 5000),
   sum: () => {
     const cells = sumColumn();
-    return msOnce(() => functions.SUM([cells]));
+    return msOnce(() => functions.ADD([cells]));
   },
   starload: async () => (await benchStarload()).nsPerCall,
 };
