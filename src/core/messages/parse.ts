@@ -39,8 +39,18 @@ export const parseMessages = {
   commaAndPoint(text: string): string {
     return `cannot read ${quote(text)}: it mixes a decimal comma and a decimal point; use one decimal separator, e.g. 7.5+j2.25 or 7,5+j2,25`;
   },
-  ambiguousComma(text: string): string {
-    return `cannot read ${quote(text)}: the comma could be a thousands separator or a decimal comma; write 1000 or 1.000 (no thousands separators)`;
+  ambiguousComma(text: string, commas: number, thousands: string, decimal: string): string {
+    const [sep, dec] = commas === 1 ? ['a thousands separator', 'a decimal comma'] : ['thousands separators', 'decimal commas'];
+    return `cannot read ${quote(text)}: with ${sep} it is ${thousands}, with ${dec} ${decimal}; write it as ${thousands} or as ${decimal}`;
+  },
+  thousandsSeparators(text: string, plain: string): string {
+    return `cannot read ${quote(text)}: thousands separators are not read; write it as ${plain}`;
+  },
+  complexInVar(text: string): string {
+    return `cannot read ${quote(text)}: var is reactive power alone (40 kvar means j40 kvar), so a value in var has no real part; for a complex power write it in VA, e.g. 8+j6 kVA`;
+  },
+  imaginaryInWatts(text: string): string {
+    return `cannot read ${quote(text)}: W is real power alone, so a value in W has no imaginary part; for a complex power write it in VA, e.g. 8+j6 kVA`;
   },
   wrongQuantity(text: string, got: Quantity, expected: Quantity): string {
     return `${quote(text)} is ${article(got)} ${got} but ${article(expected)} ${expected} is expected here; give it in ${UNIT_OF[expected]} or without a unit`;
