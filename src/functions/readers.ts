@@ -9,7 +9,7 @@
  */
 import { PhzError, isPhzError } from '../core/errors';
 import { readerMessages as M } from '../core/messages';
-import { parsePhasor, type Quantity } from '../core/parse';
+import { QUANTITY_OF, parseNumberText, parsePhasor, type Quantity, type UnitSeen, type UnitSymbol } from '../core/parse';
 import { rect, type Phasor } from '../core/phasor';
 import { formatPolar, formatRect, DEFAULT_DIGITS } from '../core/format';
 import type { HostCell, HostResult } from './spec';
@@ -19,6 +19,28 @@ export interface PhasorReadOptions {
   readonly blanks?: 'skip' | 'error';
   /** The quantity a unit word must name, if one is given. */
   readonly expect?: Quantity;
+  /** The values of one sum: every unit given must name the same quantity. */
+  readonly same?: OneQuantity;
+}
+
+/**
+ * Checks that the values of one sum (ADD's values, SUB's a and b) name one quantity:
+ * 10 A + 5 V has no meaning. A value without a unit fits any quantity, and W, var and VA
+ * are all power (40 kW + 30 kvar is the complex power 40 + j30 kVA). One per call.
+ */
+export class OneQuantity {
+  /** The parser writes each value's unit here. */
+  readonly seen: UnitSeen = { unit: null };
+  private first: { quantity: Quantity; at: string; text: string } | undefined;
+
+  /** Called after each text value is read; `at` names the cell (built only when needed). */
+  check(text: string, at: () => string): void {
+    const unit = this.seen.unit;
+    if (unit === null) return;
+    const quantity = QUANTITY_OF[unit];
+    if (this.first === undefined) this.first = { quantity, at: at(), text };
+    else if (this.first.quantity !== quantity) throw new PhzError(M.mixedQuantities(at(), text, quantity, this.first.at, this.first.text, this.first.quantity));
+  }
 }
 
 /** The default options, shared: no object is made per call on the hot path. */
@@ -50,14 +72,17 @@ export function cellName(name: string, m: unknown[][], r: number, c: number): st
 }
 
 /** One cell (known not blank) → phasor; `at` names the cell and is only built on an error. */
-function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, expect: Quantity | undefined): Phasor {
+function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, expect: Quantity | undefined, same?: OneQuantity): Phasor {
   if (typeof v === 'string') {
+    let z: Phasor;
     try {
-      return parsePhasor(v, expect ? { expect } : undefined);
+      z = parsePhasor(v, same ? { expect, seen: same.seen } : expect ? { expect } : undefined);
     } catch (e) {
       if (isPhzError(e)) throw new PhzError(M.inCell(cellName(name, m, r, col), e.message), e.code);
       throw e;
     }
+    if (same) same.check(v, () => cellName(name, m, r, col));
+    return z;
   }
   return otherCellPhasor(v, cellName(name, m, r, col));
 }
@@ -96,7 +121,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
   const skip = options.blanks === 'skip';
   // the most common call: one text cell
   if (m.length === 1 && m[0].length === 1 && typeof m[0][0] === 'string' && m[0][0] !== '') {
-    return [cellPhasor(m[0][0], name, m, 0, 0, options.expect)];
+    return [cellPhasor(m[0][0], name, m, 0, 0, options.expect, options.same)];
   }
   const out: Phasor[] = [];
   if (isPairBlock(m)) {
@@ -125,7 +150,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
         if (skip) continue;
         throw new PhzError(M.blankRequired(cellName(name, m, r, c)));
       }
-      out.push(cellPhasor(v, name, m, r, c, options.expect));
+      out.push(cellPhasor(v, name, m, r, c, options.expect, options.same));
     }
   }
   return out;
@@ -169,8 +194,8 @@ function describe(v: unknown): string {
   return String(v);
 }
 
-/** One scalar → number. Numeric text ("6") is accepted; a 1×1 matrix is unwrapped. */
-function toNumber(v: unknown, at: string): number | null {
+/** One scalar → number. Numeric text ("6", "0,8", and "4 kW" where `units` allows) is accepted; a 1×1 matrix is unwrapped. */
+function toNumber(v: unknown, at: string, units?: readonly UnitSymbol[]): number | null {
   if (Array.isArray(v)) {
     const m = asMatrix(v);
     if (m.length === 1 && m[0].length === 1) v = m[0][0];
@@ -181,12 +206,32 @@ function toNumber(v: unknown, at: string): number | null {
     if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
     return v;
   }
-  if (typeof v === 'string') {
-    const t = v.trim().replace(',', '.');
-    const n = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t) ? Number(t) : NaN;
+  if (typeof v === 'string') return textNumber(v, at, units);
+  throw new PhzError(M.numberExpected(at, describe(v)));
+}
+
+/**
+ * Numeric text: a plain decimal at once; otherwise the parser's number reading, with its
+ * decimal-comma rule and an optional unit, which must be one of `units` (the quantity the
+ * argument names). A unit is refused where the argument names none.
+ */
+function textNumber(v: string, at: string, units: readonly UnitSymbol[] | undefined): number {
+  const t = v.trim();
+  if (/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t)) {
+    const n = Number(t);
     if (Number.isFinite(n)) return n;
   }
-  throw new PhzError(M.numberExpected(at, describe(v)));
+  const seen: UnitSeen = { unit: null };
+  let n: number;
+  try {
+    n = parseNumberText(t, seen);
+  } catch (e) {
+    if (isPhzError(e)) throw new PhzError(M.inCell(at, e.message), e.code);
+    throw e;
+  }
+  if (Number.isNaN(n)) throw new PhzError(units ? M.numberWithUnitExpected(at, describe(v), units) : M.numberExpected(at, describe(v)));
+  if (seen.unit !== null && !units?.includes(seen.unit)) throw new PhzError(M.unitRefused(at, t, seen.unit, units ?? []));
+  return n;
 }
 
 export interface NumberReadOptions {
@@ -197,6 +242,8 @@ export interface NumberReadOptions {
   /** The minimum itself is not allowed (e.g. power factor > 0). */
   readonly minExclusive?: boolean;
   readonly integer?: boolean;
+  /** Unit words the argument accepts (the quantity it names, e.g. ['W'] for a real power); none when left out. */
+  readonly units?: readonly UnitSymbol[];
 }
 
 function checkNumber(n: number, at: string, o: NumberReadOptions): number {
@@ -213,7 +260,7 @@ function checkNumber(n: number, at: string, o: NumberReadOptions): number {
 
 /** Reads one number. */
 export function readNumber(v: unknown, name: string, options: NumberReadOptions = NO_OPTIONS): number {
-  const n = toNumber(v, name);
+  const n = toNumber(v, name, options.units);
   if (n === null) {
     if (options.default !== undefined) return options.default;
     throw new PhzError(M.numberRequired(name));
@@ -228,7 +275,7 @@ export function readNumbers(arg: unknown, name: string, options: NumberReadOptio
   for (let r = 0; r < m.length; r++) {
     for (let c = 0; c < m[r].length; c++) {
       const at = cellName(name, m, r, c);
-      const n = toNumber(m[r][c], at);
+      const n = toNumber(m[r][c], at, options.units);
       if (n === null) {
         if (options.skipBlanks) continue;
         throw new PhzError(M.numberRequired(at));

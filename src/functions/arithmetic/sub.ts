@@ -1,6 +1,6 @@
 import { sumOf } from '../../core/phasor';
 import { defineFunction } from '../spec';
-import { phasorColumn, readDigits, readPhasors, zipWith } from '../readers';
+import { OneQuantity, phasorColumn, readDigits, readPhasors, zipWith } from '../readers';
 import { DIGITS, phasorParam } from '../params';
 
 /** Difference a − b, row by row. */
@@ -12,6 +12,8 @@ export const SUB = defineFunction({
   result: 'Polar text, one row per pair.',
   errors: ['Blank cells, text that is not a phasor, or different counts (other than 1) give #VALUE!.'],
   examples: [{ formula: '=PHZ.SUB("230∠0", "230∠-120")', result: [['398.372∠30°']] }],
-  implementation: (a, b, digits) =>
-    phasorColumn(zipWith(readPhasors(a, 'a'), 'a', readPhasors(b, 'b'), 'b', (x, y) => sumOf([x, y.neg()])), readDigits(digits)),
+  implementation: (a, b, digits) => {
+    const same = new OneQuantity();
+    return phasorColumn(zipWith(readPhasors(a, 'a', { same }), 'a', readPhasors(b, 'b', { same }), 'b', (x, y) => sumOf([x, y.neg()])), readDigits(digits));
+  },
 });

@@ -269,7 +269,7 @@ export function CURRENT(voltage: any[][], impedance: any[][], digits?: any): any
 /**
  * Complex power S = P + jQ from real power and power factor, row by row.
  * @customfunction COMPLEXPOWER
- * @param {any[][]} real_power Real power P, e.g. 7360 for 7.36 kW (a number or a column of numbers).
+ * @param {any[][]} real_power Real power P in W, e.g. 7360 or "7.36 kW" (a number or a column of numbers).
  * @param {any[][]} power_factor Power factor, above 0 and at most 1 (a number or a column).
  * @param {any} [leading] TRUE for a leading (capacitive) load; default FALSE (lagging).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
