@@ -9,7 +9,7 @@
  */
 import { PhzError, isPhzError } from '../core/errors';
 import { readerMessages as M } from '../core/messages';
-import { QUANTITY_OF, parseNumberText, parsePhasor, type Quantity, type UnitSeen, type UnitSymbol } from '../core/parse';
+import { QUANTITY_OF, parseNumberText, parsePhasor, type ParseOptions, type Quantity, type UnitSeen, type UnitSymbol } from '../core/parse';
 import { rect, type Phasor } from '../core/phasor';
 import { formatPolar, formatRect, DEFAULT_DIGITS } from '../core/format';
 import type { HostCell, HostResult } from './spec';
@@ -33,14 +33,27 @@ export class OneQuantity {
   readonly seen: UnitSeen = { unit: null };
   private first: { quantity: Quantity; at: string; text: string } | undefined;
 
-  /** Called after each text value is read; `at` names the cell (built only when needed). */
-  check(text: string, at: () => string): void {
+  /** Parser options that report the unit here (made once per argument, not per cell). */
+  parseOptions(expect: Quantity | undefined): ParseOptions {
+    return expect ? { expect, seen: this.seen } : { seen: this.seen };
+  }
+
+  /** Called after each text value is read; the cell is named only when needed. */
+  check(text: string, name: string, m: unknown[][], r: number, c: number): void {
     const unit = this.seen.unit;
     if (unit === null) return;
     const quantity = QUANTITY_OF[unit];
-    if (this.first === undefined) this.first = { quantity, at: at(), text };
-    else if (this.first.quantity !== quantity) throw new PhzError(M.mixedQuantities(at(), text, quantity, this.first.at, this.first.text, this.first.quantity));
+    if (this.first === undefined) this.first = { quantity, at: cellName(name, m, r, c), text };
+    else if (this.first.quantity !== quantity) {
+      throw new PhzError(M.mixedQuantities(cellName(name, m, r, c), text, quantity, this.first.at, this.first.text, this.first.quantity));
+    }
   }
+}
+
+/** The parser options for one argument: no object when there is nothing to ask. */
+function parseOptionsFor(options: PhasorReadOptions): ParseOptions | undefined {
+  if (options.same) return options.same.parseOptions(options.expect);
+  return options.expect ? { expect: options.expect } : undefined;
 }
 
 /** The default options, shared: no object is made per call on the hot path. */
@@ -72,16 +85,16 @@ export function cellName(name: string, m: unknown[][], r: number, c: number): st
 }
 
 /** One cell (known not blank) → phasor; `at` names the cell and is only built on an error. */
-function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, expect: Quantity | undefined, same?: OneQuantity): Phasor {
+function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, parse: ParseOptions | undefined, same?: OneQuantity): Phasor {
   if (typeof v === 'string') {
     let z: Phasor;
     try {
-      z = parsePhasor(v, same ? { expect, seen: same.seen } : expect ? { expect } : undefined);
+      z = parsePhasor(v, parse);
     } catch (e) {
       if (isPhzError(e)) throw new PhzError(M.inCell(cellName(name, m, r, col), e.message), e.code);
       throw e;
     }
-    if (same) same.check(v, () => cellName(name, m, r, col));
+    if (same) same.check(v, name, m, r, col);
     return z;
   }
   return otherCellPhasor(v, cellName(name, m, r, col));
@@ -121,7 +134,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
   const skip = options.blanks === 'skip';
   // the most common call: one text cell
   if (m.length === 1 && m[0].length === 1 && typeof m[0][0] === 'string' && m[0][0] !== '') {
-    return [cellPhasor(m[0][0], name, m, 0, 0, options.expect, options.same)];
+    return [cellPhasor(m[0][0], name, m, 0, 0, parseOptionsFor(options), options.same)];
   }
   const out: Phasor[] = [];
   if (isPairBlock(m)) {
@@ -142,6 +155,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
     }
     return out;
   }
+  const parse = parseOptionsFor(options);
   for (let r = 0; r < m.length; r++) {
     const row = m[r];
     for (let c = 0; c < row.length; c++) {
@@ -150,7 +164,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
         if (skip) continue;
         throw new PhzError(M.blankRequired(cellName(name, m, r, c)));
       }
-      out.push(cellPhasor(v, name, m, r, c, options.expect, options.same));
+      out.push(cellPhasor(v, name, m, r, c, parse, options.same));
     }
   }
   return out;
