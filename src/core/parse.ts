@@ -289,9 +289,10 @@ function commaMode(text: string): boolean {
     else if (parts.length > 2) thousandsOnly = true;
   }
   if (decimalOnly) return true;
-  if (thousandsOnly) throw new PhzError(M.thousandsSeparators(text, text.replace(/,/g, '')));
-  const commas = (text.match(/,/g) ?? []).length;
-  throw new PhzError(M.ambiguousComma(text, commas, text.replace(/,/g, ''), text.replace(/,/g, '.')));
+  const t = text.trim();
+  if (thousandsOnly) throw new PhzError(M.thousandsSeparators(t, t.replace(/,/g, '')));
+  const commas = (t.match(/,/g) ?? []).length;
+  throw new PhzError(M.ambiguousComma(t, commas, t.replace(/,/g, ''), t.replace(/,/g, '.')));
 }
 
 /**

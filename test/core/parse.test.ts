@@ -222,10 +222,10 @@ describe('decimal comma', () => {
 
   it('names both readings of a truly ambiguous comma and how to write each', () => {
     expect(expectPhzError(() => parsePhasor('1,250')).message).toBe(
-      'cannot read "1,250": with a thousands separator it is 1250, with a decimal comma 1.250; write it as 1250 or as 1.250',
+      'cannot read "1,250": with a thousands separator it is 1250, with a decimal comma 1.250; write it as one of these',
     );
     expect(expectPhzError(() => parsePhasor('1,250+j2,500 Ω')).message).toBe(
-      'cannot read "1,250+j2,500 Ω": with thousands separators it is 1250+j2500 Ω, with decimal commas 1.250+j2.500 Ω; write it as 1250+j2500 Ω or as 1.250+j2.500 Ω',
+      'cannot read "1,250+j2,500 Ω": with thousands separators it is 1250+j2500 Ω, with decimal commas 1.250+j2.500 Ω; write it as one of these',
     );
   });
   it('refuses thousands separators where no decimal reading exists, saying how to write the number', () => {

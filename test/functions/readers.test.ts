@@ -129,7 +129,7 @@ describe('numbers, digits, choices and booleans', () => {
     expect(readNumber('0,85', 'power_factor')).toBe(0.85);
     expect(readNumber('-0,125', 'n')).toBe(-0.125);
     expect(expectPhzError(() => readNumber('1,000', 'design_current')).message).toBe(
-      'design_current: cannot read "1,000": with a thousands separator it is 1000, with a decimal comma 1.000; write it as 1000 or as 1.000',
+      'design_current: cannot read "1,000": with a thousands separator it is 1000, with a decimal comma 1.000; write it as one of these',
     );
   });
   it('readNumber takes a unit word only where the argument names its quantity', () => {
@@ -203,5 +203,19 @@ describe('blank and matrix helpers', () => {
     expect(asMatrix(3)).toEqual([[3]]);
     expect(asMatrix([1, 2])).toEqual([[1, 2]]);
     expect(asMatrix([[1], [2]])).toEqual([[1], [2]]);
+  });
+});
+
+describe('unit and comma messages stay short enough for Excel on Mac (it cuts near 255 characters)', () => {
+  const long = '1,250+j2,500 Ω' + ' '.repeat(80);
+  it.each([
+    () => readPhasors([['1', '2', '3'], ['4', '5', `1,250+j2,500${' '.repeat(70)}`]], 'impedances'),
+    () => readPhasors([['x'], [long]], 'supply_voltages'),
+    () => readRepeatedPhasors([[['10 A' + ' '.repeat(90)]], [['5 V' + ' '.repeat(90)]]], 'z', { same: new OneQuantity() }),
+    () => readNumber('40 kvar' + ' '.repeat(90), 'real_power', { units: ['W'] }),
+    () => readPhasors([['1', '2', `40+j30${' '.repeat(90)}kvar`]], 'power'),
+  ])('case %#', (f) => {
+    const m = expectPhzError(f).message;
+    expect(m.length).toBeLessThanOrEqual(255);
   });
 });
