@@ -31,7 +31,11 @@ export interface UnitSeen {
 export interface ParseOptions {
   /** When set, a unit word for another quantity is an error. */
   readonly expect?: Quantity;
-  /** When set, the parser writes here the unit the text carried (null for none). */
+  /**
+   * When set, the parser writes here the unit of a text that carries one, and leaves it
+   * alone otherwise (so plain text costs nothing): set `unit` to null before, or after
+   * reading one.
+   */
   readonly seen?: UnitSeen;
 }
 
@@ -302,10 +306,7 @@ function commaMode(text: string): boolean {
  * @example parsePhasor('230∠-120') // ≈ -115 - j199.186
  */
 export function parsePhasor(text: string, options?: ParseOptions): Phasor {
-  if (fastParse(text)) {
-    if (options?.seen) options.seen.unit = null;
-    return rect(fastResult.re, fastResult.im);
-  }
+  if (fastParse(text)) return rect(fastResult.re, fastResult.im);
   return parseGeneral(text, options);
 }
 
@@ -462,7 +463,7 @@ function finish(sc: Scanner, re: number, im: number, options: ParseOptions | und
       throw new PhzError(M.imaginaryInWatts(sc.s));
     }
   }
-  if (options?.seen) options.seen.unit = unit;
+  if (unit !== null && options?.seen) options.seen.unit = unit;
   if (!Number.isFinite(re) || !Number.isFinite(im)) throw new PhzError(M.tooLarge(sc.s));
   return rect(re, im);
 }

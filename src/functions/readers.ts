@@ -38,15 +38,29 @@ export class OneQuantity {
     return expect ? { expect, seen: this.seen } : { seen: this.seen };
   }
 
-  /** Called after each text value is read; the cell is named only when needed. */
-  check(text: string, name: string, m: unknown[][], r: number, c: number): void {
-    const unit = this.seen.unit;
-    if (unit === null) return;
-    const quantity = QUANTITY_OF[unit];
-    if (this.first === undefined) this.first = { quantity, at: cellName(name, m, r, c), text };
-    else if (this.first.quantity !== quantity) {
-      throw new PhzError(M.mixedQuantities(cellName(name, m, r, c), text, quantity, this.first.at, this.first.text, this.first.quantity));
+  /**
+   * Called once an argument is read. The parser writes a unit only for a text that has one,
+   * so a column of plain text costs one test here; when some value carried a unit, every
+   * text value is read again, in order, and its unit compared with the first one seen.
+   */
+  verify(name: string, m: unknown[][], parse: ParseOptions | undefined): void {
+    if (this.seen.unit === null) return;
+    for (let r = 0; r < m.length; r++) {
+      for (let c = 0; c < m[r].length; c++) {
+        const v = m[r][c];
+        if (typeof v !== 'string' || isBlank(v)) continue;
+        this.seen.unit = null;
+        parsePhasor(v, parse);
+        const unit = this.seen.unit as UnitSymbol | null;
+        if (unit === null) continue;
+        const quantity = QUANTITY_OF[unit];
+        if (this.first === undefined) this.first = { quantity, at: cellName(name, m, r, c), text: v };
+        else if (this.first.quantity !== quantity) {
+          throw new PhzError(M.mixedQuantities(cellName(name, m, r, c), v, quantity, this.first.at, this.first.text, this.first.quantity));
+        }
+      }
     }
+    this.seen.unit = null;
   }
 }
 
@@ -85,17 +99,14 @@ export function cellName(name: string, m: unknown[][], r: number, c: number): st
 }
 
 /** One cell (known not blank) → phasor; `at` names the cell and is only built on an error. */
-function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, parse: ParseOptions | undefined, same?: OneQuantity): Phasor {
+function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, parse: ParseOptions | undefined): Phasor {
   if (typeof v === 'string') {
-    let z: Phasor;
     try {
-      z = parsePhasor(v, parse);
+      return parsePhasor(v, parse);
     } catch (e) {
       if (isPhzError(e)) throw new PhzError(M.inCell(cellName(name, m, r, col), e.message), e.code);
       throw e;
     }
-    if (same) same.check(v, name, m, r, col);
-    return z;
   }
   return otherCellPhasor(v, cellName(name, m, r, col));
 }
@@ -134,7 +145,10 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
   const skip = options.blanks === 'skip';
   // the most common call: one text cell
   if (m.length === 1 && m[0].length === 1 && typeof m[0][0] === 'string' && m[0][0] !== '') {
-    return [cellPhasor(m[0][0], name, m, 0, 0, parseOptionsFor(options), options.same)];
+    const parse = parseOptionsFor(options);
+    const z = cellPhasor(m[0][0], name, m, 0, 0, parse);
+    if (options.same) options.same.verify(name, m, parse);
+    return [z];
   }
   const out: Phasor[] = [];
   if (isPairBlock(m)) {
@@ -164,9 +178,10 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
         if (skip) continue;
         throw new PhzError(M.blankRequired(cellName(name, m, r, c)));
       }
-      out.push(cellPhasor(v, name, m, r, c, parse, options.same));
+      out.push(cellPhasor(v, name, m, r, c, parse));
     }
   }
+  if (options.same) options.same.verify(name, m, parse);
   return out;
 }
 

@@ -186,11 +186,14 @@ describe('units of power keep their meaning', () => {
   it('still checks the quantity of a power unit against the argument', () => {
     expect(expectPhzError(() => parsePhasor('40 kvar', { expect: 'voltage' })).message).toMatch(/is a power but a voltage is expected/);
   });
-  it('reports the unit it read, when asked, and nothing for plain text', () => {
-    const seen: { unit: UnitSymbol | null } = { unit: 'V' };
-    parsePhasor('8+j6', { seen });
-    expect(seen.unit).toBeNull();
+  it('reports the unit it read, when asked, and leaves the record alone for text without one', () => {
+    const seen: { unit: UnitSymbol | null } = { unit: null };
+    for (const text of ['8+j6', '230∠-120', '1e3+j2', '0,5']) {
+      parsePhasor(text, { seen });
+      expect(seen.unit, text).toBeNull();
+    }
     for (const [text, unit] of [['40 kvar', 'var'], ['4 kW', 'W'], ['4+j3 kVA', 'VA'], ['7+j5 ohm', 'Ω'], ['11 kV∠0', 'V'], ['5 mS', 'S'], ['5 A', 'A']] as const) {
+      seen.unit = null;
       parsePhasor(text, { seen });
       expect(seen.unit, text).toBe(unit);
     }
