@@ -2,3 +2,4 @@ export * from './errors';
 export * from './phasor';
 export * from './parse';
 export * from './format';
+export * from './combine';

@@ -5,10 +5,12 @@
  * - rectangular: `7+j5`, `7+5j`, `7+5i`, `7 - j 5`, `-j3`, `j`, `2.5e-3+j1e-2`, `−` (U+2212) as minus;
  * - polar, degrees by default: `230∠-120`, `230∠-120°`, `230<-120`, `230@-120`, `1∠0.5rad`;
  * - exponential: `230e^(j30)`, `230e^(-j30°)`;
- * - a decimal comma where no other reading exists: `7,5+j2,25`;
+ * - a decimal comma where no other reading exists: `7,5+j2,25`, `0,125`, `0,250+j0,080`;
  * - a unit with SI prefix after the number or at the end: `11 kV∠0`, `7+j5 Ω`, `250 mΩ`.
  *   The prefix scales the value; the unit word is checked (and, when the caller says
- *   what quantity it expects, matched), never converted.
+ *   what quantity it expects, matched), never converted — except that a power unit says
+ *   which part of S = P + jQ the value is: var is reactive power, so `40 kvar` and
+ *   `j40 kvar` are both j40 000; W is real power; VA is complex power (any value).
  */
 import { PhzError } from './errors';
 import { polarDeg, polar, rect, type Phasor } from './phasor';
@@ -18,25 +20,49 @@ import { fastParse, fastResult } from './fastparse';
 /** The physical quantity a unit word names. */
 export type Quantity = 'voltage' | 'current' | 'impedance' | 'admittance' | 'power';
 
+/** A unit as the parser read it (prefix removed). W, var and VA are three kinds of power. */
+export type UnitSymbol = 'V' | 'A' | 'Ω' | 'S' | 'W' | 'var' | 'VA';
+
+/** Where the parser writes the unit a text carried (null for none). */
+export interface UnitSeen {
+  unit: UnitSymbol | null;
+}
+
 export interface ParseOptions {
   /** When set, a unit word for another quantity is an error. */
   readonly expect?: Quantity;
+  /**
+   * When set, the parser writes here the unit of a text that carries one, and leaves it
+   * alone otherwise (so plain text costs nothing): set `unit` to null before, or after
+   * reading one.
+   */
+  readonly seen?: UnitSeen;
 }
 
-const UNIT_WORDS: ReadonlyArray<readonly [string, Quantity]> = [
-  ['ohms', 'impedance'],
-  ['ohm', 'impedance'],
-  ['var', 'power'],
-  ['va', 'power'],
-  ['v', 'voltage'],
-  ['a', 'current'],
-  ['w', 'power'],
-  ['s', 'admittance'],
-  // Ω: both the Greek capital omega (U+03A9) and the ohm sign (U+2126) lower-case to ω
-  ['\u03c9', 'impedance'],
-];
+/** The quantity each unit measures. */
+export const QUANTITY_OF: Readonly<Record<UnitSymbol, Quantity>> = {
+  V: 'voltage',
+  A: 'current',
+  Ω: 'impedance',
+  S: 'admittance',
+  W: 'power',
+  var: 'power',
+  VA: 'power',
+};
 
-const UNIT_QUANTITY: Readonly<Record<string, Quantity>> = Object.fromEntries(UNIT_WORDS);
+/** Unit words, lower case, to the unit they name. */
+const UNIT_WORDS: Readonly<Record<string, UnitSymbol>> = {
+  ohms: 'Ω',
+  ohm: 'Ω',
+  var: 'var',
+  va: 'VA',
+  v: 'V',
+  a: 'A',
+  w: 'W',
+  s: 'S',
+  // Ω: both the Greek capital omega (U+03A9) and the ohm sign (U+2126) lower-case to ω
+  '\u03c9': 'Ω',
+};
 
 const PREFIX: Readonly<Record<string, number>> = {
   p: 1e-12,
@@ -73,7 +99,7 @@ function lower(c: number): number {
 /** Scanner state for one text; positions are UTF-16 indexes. */
 class Scanner {
   i = 0;
-  unit: Quantity | null = null;
+  unit: UnitSymbol | null = null;
   /** Whether the last angle read was in radians. */
   rad = false;
   constructor(
@@ -174,10 +200,10 @@ class Scanner {
         end++;
       }
       const word = s.slice(k, end).toLowerCase();
-      const q = UNIT_QUANTITY[word];
-      if (q === undefined) continue;
+      const u = UNIT_WORDS[word];
+      if (u === undefined) continue;
       if (this.unit !== null) throw this.fail(M.twoUnits);
-      this.unit = q;
+      this.unit = u;
       this.i = end;
       return scale;
     }
@@ -247,14 +273,30 @@ function expAngle(sc: Scanner): number {
   return sg === -1 ? -a : a;
 }
 
-/** Where a comma is used, decide whether it is a decimal comma. */
+/**
+ * Where a comma is used, decide whether it is a decimal comma. A thousands-grouped number
+ * has one to three leading digits, the first not 0, then groups of exactly three digits
+ * (common practice). A comma that cannot be part of such a number (`0,125`, `2,5`,
+ * `1234,5`) is a decimal comma, and then every comma of the text is. Where every comma
+ * could be either, the text is refused with both readings.
+ */
 function commaMode(text: string): boolean {
   if (text.indexOf(',') < 0) return false;
   if (text.indexOf('.') >= 0) throw new PhzError(M.commaAndPoint(text));
-  // every comma followed by exactly three digits could be a thousands separator: refuse to guess
-  const groups = text.match(/,\d*/g) ?? [];
-  if (groups.every((g) => g.length === 4)) throw new PhzError(M.ambiguousComma(text));
-  return true;
+  let decimalOnly = false;
+  let thousandsOnly = false;
+  for (const run of text.match(/[0-9,]*,[0-9,]*/g) ?? []) {
+    const parts = run.split(',');
+    const lead = parts[0];
+    const couldBeThousands = lead.length >= 1 && lead.length <= 3 && lead[0] !== '0' && parts.slice(1).every((g) => g.length === 3);
+    if (!couldBeThousands) decimalOnly = true;
+    else if (parts.length > 2) thousandsOnly = true;
+  }
+  if (decimalOnly) return true;
+  const t = text.trim();
+  if (thousandsOnly) throw new PhzError(M.thousandsSeparators(t, t.replace(/,/g, '')));
+  const commas = (t.match(/,/g) ?? []).length;
+  throw new PhzError(M.ambiguousComma(t, commas, t.replace(/,/g, ''), t.replace(/,/g, '.')));
 }
 
 /**
@@ -281,9 +323,33 @@ export interface PhasorWithQuantity {
  * @example parsePhasorWithQuantity('11 kV∠0') // { phasor: 11000 + j0, quantity: 'voltage' }
  */
 export function parsePhasorWithQuantity(text: string, options?: ParseOptions): PhasorWithQuantity {
-  if (fastParse(text)) return { phasor: rect(fastResult.re, fastResult.im), quantity: null };
+  const seen: UnitSeen = { unit: null };
+  const phasor = parsePhasor(text, { ...options, seen });
+  return { phasor, quantity: seen.unit === null ? null : QUANTITY_OF[seen.unit] };
+}
+
+/**
+ * Reads one real number with an optional unit (`4 kW`, `-2,5 kvar`, `0,8`, `1e3`) for a
+ * numeric argument: the prefix scales it and the unit goes to `seen` for the caller to
+ * accept or refuse (a var value stays a plain number here: the argument says what it is).
+ * NaN when the text is not one number with an optional unit; a `PhzError` for a comma
+ * that could be read two ways or a value too large.
+ */
+export function parseNumberText(text: string, seen: UnitSeen): number {
   const sc = new Scanner(text, commaMode(text));
-  return { phasor: scan(sc, options), quantity: sc.unit };
+  sc.ws();
+  const sg = sc.sign();
+  sc.ws();
+  const v = sc.number();
+  if (Number.isNaN(v)) return NaN;
+  sc.ws();
+  const scale = sc.done ? 1 : sc.unitScale();
+  sc.ws();
+  if (!sc.done) return NaN;
+  const x = (sg === -1 ? -v : v) * scale;
+  if (!Number.isFinite(x)) throw new PhzError(M.tooLarge(text));
+  seen.unit = sc.unit;
+  return x;
 }
 
 /** The general scanner: every notation, with messages. Exported for the fast-path agreement test. */
@@ -388,7 +454,12 @@ function scan(sc: Scanner, options: ParseOptions | undefined): Phasor {
   return finish(sc, re * scale, im * scale, options);
 }
 
-/** Reads a trailing unit, checks nothing is left and the unit fits the expected quantity. */
+/**
+ * Reads a trailing unit, checks nothing is left and the unit fits the expected quantity.
+ * A power unit places the value in S = P + jQ: a real value in var is jQ, a value in var
+ * that is already imaginary stays, and a complex value in var or a non-real one in W is
+ * refused (it is a complex power: VA).
+ */
 function finish(sc: Scanner, re: number, im: number, options: ParseOptions | undefined): Phasor {
   sc.ws();
   if (!sc.done) {
@@ -398,9 +469,22 @@ function finish(sc: Scanner, re: number, im: number, options: ParseOptions | und
     re *= scale;
     im *= scale;
   }
-  if (options?.expect && sc.unit !== null && sc.unit !== options.expect) {
-    throw new PhzError(M.wrongQuantity(sc.s, sc.unit, options.expect));
+  const unit = sc.unit;
+  if (unit !== null) {
+    if (options?.expect && QUANTITY_OF[unit] !== options.expect) {
+      throw new PhzError(M.wrongQuantity(sc.s, QUANTITY_OF[unit], options.expect));
+    }
+    if (unit === 'var') {
+      if (re !== 0 && im !== 0) throw new PhzError(M.complexInVar(sc.s));
+      if (im === 0) {
+        im = re;
+        re = 0;
+      }
+    } else if (unit === 'W' && im !== 0) {
+      throw new PhzError(M.imaginaryInWatts(sc.s));
+    }
   }
+  if (unit !== null && options?.seen) options.seen.unit = unit;
   if (!Number.isFinite(re) || !Number.isFinite(im)) throw new PhzError(M.tooLarge(sc.s));
   return rect(re, im);
 }

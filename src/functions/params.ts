@@ -26,4 +26,14 @@ export function repeatParam(name: string, what: string): ParamSpec {
   };
 }
 
+/**
+ * What a number read from a phasor is worth: the phasor as given, so a chained result
+ * carries only the figures its text shows (the functions that split phasors into numbers
+ * say so in their details).
+ */
+export const READS_TEXT_NOTE =
+  'The number is as precise as the phasor it reads: exact for a value you type, but another function’s text result ' +
+  'holds only the significant figures it shows (6 unless asked for more), and the number has those figures only. ' +
+  'For a chained result ask that function for 15 digits first (or use its …FULL twin), e.g. PHZ.REAL(PHZ.DIV(V, Z, 15)).';
+
 export const PHASOR_RESULT_NOTE = 'Polar text (magnitude∠angle°); one phasor per row when several are given.';

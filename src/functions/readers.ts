@@ -15,7 +15,7 @@
  */
 import { PhzError, isPhzError } from '../core/errors';
 import { readerMessages as M } from '../core/messages';
-import { parsePhasor, type Quantity } from '../core/parse';
+import { QUANTITY_OF, parseNumberText, parsePhasor, type ParseOptions, type Quantity, type UnitSeen, type UnitSymbol } from '../core/parse';
 import { polar, polarDeg, rect, type Phasor } from '../core/phasor';
 import { valueMessages } from '../core/messages/values';
 import { describeObject, errorName, isEntity, phasorProperties, plainCell, plainRows } from './cellvalues';
@@ -27,6 +27,55 @@ export interface PhasorReadOptions {
   readonly blanks?: 'skip' | 'error';
   /** The quantity a unit word must name, if one is given. */
   readonly expect?: Quantity;
+  /** The values of one sum: every unit given must name the same quantity. */
+  readonly same?: OneQuantity;
+}
+
+/**
+ * Checks that the values of one sum (ADD's values, SUB's a and b) name one quantity:
+ * 10 A + 5 V has no meaning. A value without a unit fits any quantity, and W, var and VA
+ * are all power (40 kW + 30 kvar is the complex power 40 + j30 kVA). One per call.
+ */
+export class OneQuantity {
+  /** The parser writes each value's unit here. */
+  readonly seen: UnitSeen = { unit: null };
+  private first: { quantity: Quantity; at: string; text: string } | undefined;
+
+  /** Parser options that report the unit here (made once per argument, not per cell). */
+  parseOptions(expect: Quantity | undefined): ParseOptions {
+    return expect ? { expect, seen: this.seen } : { seen: this.seen };
+  }
+
+  /**
+   * Called once an argument is read. The parser writes a unit only for a text that has one,
+   * so a column of plain text costs one test here; when some value carried a unit, every
+   * text value is read again, in order, and its unit compared with the first one seen.
+   */
+  verify(name: string, m: unknown[][], parse: ParseOptions | undefined): void {
+    if (this.seen.unit === null) return;
+    for (let r = 0; r < m.length; r++) {
+      for (let c = 0; c < m[r].length; c++) {
+        const v = m[r][c];
+        if (typeof v !== 'string' || isBlank(v)) continue;
+        this.seen.unit = null;
+        parsePhasor(v, parse);
+        const unit = this.seen.unit as UnitSymbol | null;
+        if (unit === null) continue;
+        const quantity = QUANTITY_OF[unit];
+        if (this.first === undefined) this.first = { quantity, at: cellName(name, m, r, c), text: v };
+        else if (this.first.quantity !== quantity) {
+          throw new PhzError(M.mixedQuantities(cellName(name, m, r, c), v, quantity, this.first.at, this.first.text, this.first.quantity));
+        }
+      }
+    }
+    this.seen.unit = null;
+  }
+}
+
+/** The parser options for one argument: no object when there is nothing to ask. */
+function parseOptionsFor(options: PhasorReadOptions): ParseOptions | undefined {
+  if (options.same) return options.same.parseOptions(options.expect);
+  return options.expect ? { expect: options.expect } : undefined;
 }
 
 /** The default options, shared: no object is made per call on the hot path. */
@@ -62,10 +111,10 @@ export function cellName(name: string, m: unknown[][], r: number, c: number): st
 }
 
 /** One cell (known not blank) → phasor; `at` names the cell and is only built on an error. */
-function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, expect: Quantity | undefined): Phasor {
+function cellPhasor(v: unknown, name: string, m: unknown[][], r: number, col: number, parse: ParseOptions | undefined): Phasor {
   if (typeof v === 'string') {
     try {
-      return parsePhasor(v, expect ? { expect } : undefined);
+      return parsePhasor(v, parse);
     } catch (e) {
       if (isPhzError(e)) throw new PhzError(M.inCell(cellName(name, m, r, col), e.message), e.code);
       throw e;
@@ -143,7 +192,10 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
   if (Array.isArray(arg) && arg.length === 1) {
     const row: unknown = arg[0];
     if (Array.isArray(row) && row.length === 1 && typeof row[0] === 'string' && row[0] !== '') {
-      return [cellPhasor(row[0], name, arg as unknown[][], 0, 0, options.expect)];
+      const parse = parseOptionsFor(options);
+      const z = cellPhasor(row[0], name, arg as unknown[][], 0, 0, parse);
+      if (options.same) options.same.verify(name, arg as unknown[][], parse);
+      return [z];
     }
   }
   const m = asMatrix(arg);
@@ -167,6 +219,7 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
     }
     return out;
   }
+  const parse = parseOptionsFor(options);
   for (let r = 0; r < m.length; r++) {
     const row = m[r];
     for (let c = 0; c < row.length; c++) {
@@ -175,9 +228,10 @@ export function readPhasors(arg: unknown, name: string, options: PhasorReadOptio
         if (skip) continue;
         throw new PhzError(M.blankRequired(cellName(name, m, r, c)));
       }
-      out.push(cellPhasor(v, name, m, r, c, options.expect));
+      out.push(cellPhasor(v, name, m, r, c, parse));
     }
   }
+  if (options.same) options.same.verify(name, m, parse);
   return out;
 }
 
@@ -229,8 +283,11 @@ function oneCell(v: unknown): unknown {
   return typeof v === 'object' && v !== null ? plainCell(v) : v;
 }
 
-/** One scalar → number. Numeric text ("6") is accepted; a 1×1 matrix is unwrapped. */
-function toNumber(v: unknown, at: string): number | null {
+/**
+ * One scalar → number. Numeric text ("6", "0,8", and "4 kW" where `units` allows) is
+ * accepted; a 1×1 range and a number data type are unwrapped.
+ */
+function toNumber(v: unknown, at: string, units?: readonly UnitSymbol[]): number | null {
   if (typeof v === 'number') {
     if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
     return v;
@@ -242,13 +299,33 @@ function toNumber(v: unknown, at: string): number | null {
     if (!Number.isFinite(v)) throw new PhzError(M.notFinite(at));
     return v;
   }
-  if (typeof v === 'string') {
-    const t = v.trim().replace(',', '.');
-    const n = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t) ? Number(t) : NaN;
-    if (Number.isFinite(n)) return n;
-  }
+  if (typeof v === 'string') return textNumber(v, at, units);
   if (typeof v === 'object' && v !== null) throw refusal(v, at, (got) => M.numberExpected(at, got));
   throw new PhzError(M.numberExpected(at, describe(v)));
+}
+
+/**
+ * Numeric text: a plain decimal at once; otherwise the parser's number reading, with its
+ * decimal-comma rule and an optional unit, which must be one of `units` (the quantity the
+ * argument names). A unit is refused where the argument names none.
+ */
+function textNumber(v: string, at: string, units: readonly UnitSymbol[] | undefined): number {
+  const t = v.trim();
+  if (/^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i.test(t)) {
+    const n = Number(t);
+    if (Number.isFinite(n)) return n;
+  }
+  const seen: UnitSeen = { unit: null };
+  let n: number;
+  try {
+    n = parseNumberText(t, seen);
+  } catch (e) {
+    if (isPhzError(e)) throw new PhzError(M.inCell(at, e.message), e.code);
+    throw e;
+  }
+  if (Number.isNaN(n)) throw new PhzError(units ? M.numberWithUnitExpected(at, describe(v), units) : M.numberExpected(at, describe(v)));
+  if (seen.unit !== null && !units?.includes(seen.unit)) throw new PhzError(M.unitRefused(at, t, seen.unit, units ?? []));
+  return n;
 }
 
 export interface NumberReadOptions {
@@ -259,6 +336,8 @@ export interface NumberReadOptions {
   /** The minimum itself is not allowed (e.g. power factor > 0). */
   readonly minExclusive?: boolean;
   readonly integer?: boolean;
+  /** Unit words the argument accepts (the quantity it names, e.g. ['W'] for a real power); none when left out. */
+  readonly units?: readonly UnitSymbol[];
 }
 
 function checkNumber(n: number, at: string, o: NumberReadOptions): number {
@@ -275,7 +354,7 @@ function checkNumber(n: number, at: string, o: NumberReadOptions): number {
 
 /** Reads one number. */
 export function readNumber(v: unknown, name: string, options: NumberReadOptions = NO_OPTIONS): number {
-  const n = toNumber(v, name);
+  const n = toNumber(v, name, options.units);
   if (n === null) {
     if (options.default !== undefined) return options.default;
     throw new PhzError(M.numberRequired(name));
@@ -290,7 +369,7 @@ export function readNumbers(arg: unknown, name: string, options: NumberReadOptio
   for (let r = 0; r < m.length; r++) {
     for (let c = 0; c < m[r].length; c++) {
       const at = cellName(name, m, r, c);
-      const n = toNumber(m[r][c], at);
+      const n = toNumber(m[r][c], at, options.units);
       if (n === null) {
         if (options.skipBlanks) continue;
         throw new PhzError(M.numberRequired(at));

@@ -61,6 +61,12 @@ export interface FunctionSpec {
   readonly errors: readonly string[];
   /** At least one example; a test evaluates each through the formula engine. */
   readonly examples: readonly ExampleSpec[];
+  /**
+   * For a function whose repeating argument leaves no room for a digits argument: the name
+   * of its twin, which takes the same arguments and gives the result to 15 significant
+   * figures (the route for chains whose later steps need the figures).
+   */
+  readonly fullTwin?: string;
   /** Cautions shown beside the function (sizing and protection results). */
   readonly cautions?: readonly string[];
   /**

@@ -61,7 +61,9 @@ export class PhzEngine {
 
   constructor(options: EngineOptions = {}) {
     registerRegistry(options.registry ?? defaultRegistry);
-    const config = { licenseKey: LICENSE_KEY, undoLimit: 0, useArrayArithmetic: true };
+    // Excel keeps 15 significant figures of a number; the engine's default hands out 11
+    // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures.
+    const config = { licenseKey: LICENSE_KEY, undoLimit: 0, useArrayArithmetic: true, precisionRounding: 14 };
     const sheets = options.sheets ?? {};
     this.hf =
       Object.keys(sheets).length > 0

@@ -1,5 +1,5 @@
 import { describe, it, expect } from 'vitest';
-import { parsePhasor, parsePhasorWithQuantity } from '../../src/core/parse';
+import { parsePhasor, parsePhasorWithQuantity, parseNumberText, type UnitSymbol } from '../../src/core/parse';
 import { expectPhasorClose, expectPhzError } from '../helpers';
 
 const c30 = Math.cos(Math.PI / 6);
@@ -72,7 +72,6 @@ describe('parsePhasor reads every notation', () => {
     ['12 uA', r(12e-6, 0)],
     ['3 MVA', r(3e6, 0)],
     ['3 mVA', r(3e-3, 0)],
-    ['40 kvar', r(40000, 0)],
     ['40+j30 kVA', r(40000, 30000)],
     ['2 MW', r(2e6, 0)],
     ['5 mS', r(0.005, 0)],
@@ -105,7 +104,7 @@ describe('parsePhasor refuses malformed text with what was read, where it stoppe
     ['2 kΩ∠30 V', /one unit/],
     ['5 furlongs', /not part of a phasor or a known unit/],
     ['4.5,2', /mixes a decimal comma and a decimal point/],
-    ['1,000', /thousands separator/],
+    ['1,000', /with a thousands separator it is 1000, with a decimal comma 1/],
     ['1e400', /too large/],
     ['Infinity', /stopped at "nfinity"/],
     ['NaN', /number was expected/],
@@ -175,5 +174,111 @@ describe('parsePhasorWithQuantity says which quantity a unit word names', () => 
   it('gives the parser its own message for text it cannot read', () => {
     const err = expectPhzError(() => parsePhasorWithQuantity('12 furlongs'));
     expect(err.message).toMatch(/^cannot read "12 furlongs" as a phasor/);
+  });
+});
+
+// Reactive power is measured in var and is the imaginary part of S = P + jQ; real power is
+// measured in W; complex and apparent power in VA (IEC 60050-131, IEV 131-11-39 to -44,
+// from memory). A unit that changed the meaning of a value would be a silent error.
+describe('units of power keep their meaning', () => {
+  it.each([
+    ['40 kvar', r(0, 40000)],
+    ['j40 kvar', r(0, 40000)],
+    ['40j kvar', r(0, 40000)],
+    ['-40 kvar', r(0, -40000)],
+    ['-j40 kvar', r(0, -40000)],
+    ['40 kVAr', r(0, 40000)],
+    ['1,5 Mvar', r(0, 1.5e6)],
+    ['40∠90 kvar', r(0, 40000)],
+    ['0 var', r(0, 0)],
+    ['40 kW', r(40000, 0)],
+    ['-2,5 kW', r(-2500, 0)],
+    ['40+j30 kVA', r(40000, 30000)],
+    ['50 kVA∠36.87', pd(50000, 36.87)],
+    ['3 MVA', r(3e6, 0)],
+  ])('%s', (text, expected) => {
+    expectPhasorClose(parsePhasor(text), expected, 1e-12);
+  });
+
+  it.each(['40+j30 kvar', '40∠30 kvar', '5e^(j10) var'])('refuses the complex value %j in var, pointing to VA', (text) => {
+    expect(expectPhzError(() => parsePhasor(text)).message).toMatch(/var is reactive power alone .*write it in VA/);
+  });
+  it.each(['40+j30 kW', 'j40 kW', '40∠30 kW', '-j2 MW'])('refuses the non-real value %j in W, pointing to VA', (text) => {
+    expect(expectPhzError(() => parsePhasor(text)).message).toMatch(/W is real power alone.*write it in VA/);
+  });
+  it('still checks the quantity of a power unit against the argument', () => {
+    expect(expectPhzError(() => parsePhasor('40 kvar', { expect: 'voltage' })).message).toMatch(/is a power but a voltage is expected/);
+  });
+  it('reports the unit it read, when asked, and leaves the record alone for text without one', () => {
+    const seen: { unit: UnitSymbol | null } = { unit: null };
+    for (const text of ['8+j6', '230∠-120', '1e3+j2', '0,5']) {
+      parsePhasor(text, { seen });
+      expect(seen.unit, text).toBeNull();
+    }
+    for (const [text, unit] of [['40 kvar', 'var'], ['4 kW', 'W'], ['4+j3 kVA', 'VA'], ['7+j5 ohm', 'Ω'], ['11 kV∠0', 'V'], ['5 mS', 'S'], ['5 A', 'A']] as const) {
+      seen.unit = null;
+      parsePhasor(text, { seen });
+      expect(seen.unit, text).toBe(unit);
+    }
+  });
+});
+
+describe('decimal comma', () => {
+  // A thousands-grouped number has one to three leading digits, the first not 0, then groups of
+  // exactly three (common practice): a comma after a leading 0, after four or more digits, or
+  // before other than three digits is a decimal comma.
+  it.each([
+    ['0,125', r(0.125, 0)],
+    ['-0,125', r(-0.125, 0)],
+    ['\u22120,125', r(-0.125, 0)],
+    ['+0,125', r(0.125, 0)],
+    ['0,045 Ω', r(0.045, 0)],
+    ['0,045Ω', r(0.045, 0)],
+    ['0,250+j0,080', r(0.25, 0.08)],
+    ['0,250-j0,080', r(0.25, -0.08)],
+    ['j0,125', r(0, 0.125)],
+    ['0,125∠-30', pd(0.125, -30)],
+    ['230∠-120,25', pd(230, -120.25)],
+    ['1234,567', r(1234.567, 0)],
+    ['1,250+j2,5', r(1.25, 2.5)],
+    ['7,5+j2,25', r(7.5, 2.25)],
+  ])('%s', (text, expected) => {
+    expectPhasorClose(parsePhasor(text), expected, 1e-15);
+  });
+
+  it('names both readings of a truly ambiguous comma and how to write each', () => {
+    expect(expectPhzError(() => parsePhasor('1,250')).message).toBe(
+      'cannot read "1,250": with a thousands separator it is 1250, with a decimal comma 1.250; write it as one of these',
+    );
+    expect(expectPhzError(() => parsePhasor('1,250+j2,500 Ω')).message).toBe(
+      'cannot read "1,250+j2,500 Ω": with thousands separators it is 1250+j2500 Ω, with decimal commas 1.250+j2.500 Ω; write it as one of these',
+    );
+  });
+  it('refuses thousands separators where no decimal reading exists, saying how to write the number', () => {
+    expect(expectPhzError(() => parsePhasor('1,000,000')).message).toBe(
+      'cannot read "1,000,000": thousands separators are not read; write it as 1000000',
+    );
+  });
+});
+
+describe('parseNumberText: one number with an optional unit, for numeric arguments', () => {
+  it.each([
+    ['4 kW', 4000, 'W'],
+    ['4kW', 4000, 'W'],
+    ['-2,5 kvar', -2500, 'var'],
+    ['0,8', 0.8, null],
+    ['1e3', 1000, null],
+    [' 32 A ', 32, 'A'],
+    ['11 kV', 11000, 'V'],
+  ] as const)('%j', (text, value, unit) => {
+    const seen: { unit: UnitSymbol | null } = { unit: null };
+    expect(parseNumberText(text, seen)).toBe(value);
+    expect(seen.unit).toBe(unit);
+  });
+  it.each(['4+j3', '4∠30', 'four', '4 furlongs', '4 kW kW', '', 'j4'])('is NaN for %j, which is not one number', (text) => {
+    expect(parseNumberText(text, { unit: null })).toBeNaN();
+  });
+  it('applies the decimal comma rule', () => {
+    expect(expectPhzError(() => parseNumberText('1,000', { unit: null })).message).toMatch(/with a thousands separator it is 1000, with a decimal comma 1\.000;/);
   });
 });

@@ -12,6 +12,7 @@ import {
   zipWith,
   isBlank,
   asMatrix,
+  OneQuantity,
 } from '../../src/functions/readers';
 import { expectPhasorClose, expectPhzError } from '../helpers';
 
@@ -92,6 +93,25 @@ describe('single, some and repeated phasors', () => {
   });
 });
 
+describe('OneQuantity: the values of one sum name one quantity', () => {
+  it('refuses a current added to a voltage, naming both values', () => {
+    const same = new OneQuantity();
+    expect(expectPhzError(() => readRepeatedPhasors([[['10 A']], [['5 V']]], 'z', { same })).message).toBe(
+      'z2 ("5 V") is a voltage but z1 ("10 A") is a current: the values of one sum must be one quantity; check the units',
+    );
+  });
+  it('lets values without a unit join any quantity, and W, var and VA add as powers', () => {
+    expect(readRepeatedPhasors([[['10 A'], [4], ['3+j1']], [['2 A']]], 'z', { same: new OneQuantity() })).toHaveLength(4);
+    const s = readRepeatedPhasors([[['40 kW']], [['30 kvar']], [['1+j1 kVA']]], 'z', { same: new OneQuantity() });
+    expect(s.map((z) => [z.re, z.im])).toEqual([[40000, 0], [0, 30000], [1000, 1000]]);
+  });
+  it('checks across arguments when one checker is shared', () => {
+    const same = new OneQuantity();
+    readPhasors([['10 A']], 'a', { same });
+    expect(expectPhzError(() => readPhasors([['5 Ω'], ['2 V']], 'b', { same })).message).toMatch(/^b, row 1 \("5 Ω"\) is an impedance but a \("10 A"\) is a current/);
+  });
+});
+
 describe('numbers, digits, choices and booleans', () => {
   it('readNumber accepts numbers and numeric text, applies defaults and ranges', () => {
     expect(readNumber(3, 'n')).toBe(3);
@@ -107,6 +127,35 @@ describe('numbers, digits, choices and booleans', () => {
     );
     expect(expectPhzError(() => readNumber(null, 'n')).message).toMatch(/is blank: a number is required/);
     expect(expectPhzError(() => readNumber([[1, 2]], 'n')).message).toMatch(/a range of several cells/);
+  });
+  it('readNumber reads a decimal comma by the parser\'s rule, and names both readings of an ambiguous one', () => {
+    expect(readNumber('0,85', 'power_factor')).toBe(0.85);
+    expect(readNumber('-0,125', 'n')).toBe(-0.125);
+    expect(expectPhzError(() => readNumber('1,000', 'design_current')).message).toBe(
+      'design_current: cannot read "1,000": with a thousands separator it is 1000, with a decimal comma 1.000; write it as one of these',
+    );
+  });
+  it('readNumber takes a unit word only where the argument names its quantity', () => {
+    expect(readNumber('4 kW', 'real_power', { units: ['W'] })).toBe(4000);
+    expect(readNumber('2,5 kW', 'real_power', { units: ['W'] })).toBe(2500);
+    expect(readNumber(' 32 A', 'design_current', { units: ['A'] })).toBe(32);
+    expect(readNumber('4000', 'real_power', { units: ['W'] })).toBe(4000);
+    expect(expectPhzError(() => readNumber('40 kvar', 'real_power', { units: ['W'] })).message).toBe(
+      'real_power is "40 kvar", a reactive power in var, but takes a real power in W: give it in W or as a plain number',
+    );
+    expect(expectPhzError(() => readNumber('4 kVA', 'real_power', { units: ['W'] })).message).toMatch(
+      /^real_power is "4 kVA", a complex or apparent power in VA, but takes a real power in W/,
+    );
+    expect(readNumber('11 kV', 'magnitude', { units: ['V', 'A'] })).toBe(11000);
+    expect(expectPhzError(() => readNumber('5 Ω', 'magnitude', { units: ['V', 'A'] })).message).toBe(
+      'magnitude is "5 Ω", an impedance in Ω, but takes a voltage in V or a current in A: give it in V or A or as a plain number',
+    );
+    expect(expectPhzError(() => readNumber('0.8 W', 'power_factor')).message).toBe(
+      'power_factor is "0.8 W", a real power in W, but takes a plain number: give it without a unit',
+    );
+    expect(expectPhzError(() => readNumber('4+j3 kW', 'real_power', { units: ['W'] })).message).toBe(
+      'real_power must be a number but is the text "4+j3 kW": give a number, with or without a unit (W)',
+    );
   });
   it('readNumbers reads a column and names the bad cell', () => {
     expect(readNumbers([[1], [2], [3]], 'angle')).toEqual([1, 2, 3]);
@@ -157,5 +206,19 @@ describe('blank and matrix helpers', () => {
     expect(asMatrix(3)).toEqual([[3]]);
     expect(asMatrix([1, 2])).toEqual([[1, 2]]);
     expect(asMatrix([[1], [2]])).toEqual([[1], [2]]);
+  });
+});
+
+describe('unit and comma messages stay short enough for Excel on Mac (it cuts near 255 characters)', () => {
+  const long = '1,250+j2,500 Ω' + ' '.repeat(80);
+  it.each([
+    () => readPhasors([['1', '2', '3'], ['4', '5', `1,250+j2,500${' '.repeat(70)}`]], 'impedances'),
+    () => readPhasors([['1'], [long]], 'supply_voltages'),
+    () => readRepeatedPhasors([[['10 A' + ' '.repeat(90)]], [['5 V' + ' '.repeat(90)]]], 'z', { same: new OneQuantity() }),
+    () => readNumber('40 kvar' + ' '.repeat(90), 'real_power', { units: ['W'] }),
+    () => readPhasors([['1', '2', `40+j30${' '.repeat(90)}kvar`]], 'power'),
+  ])('case %#', (f) => {
+    const m = expectPhzError(f).message;
+    expect(m.length).toBeLessThanOrEqual(255);
   });
 });

@@ -15,6 +15,11 @@ function article(word: string): string {
   return /^[aeiou]/.test(word) ? 'an' : 'a';
 }
 
+/** A reading of the text for a message, at most 32 characters (Excel on Mac cuts long messages). */
+function clip(text: string): string {
+  return text.length > 32 ? `${text.slice(0, 31)}…` : text;
+}
+
 function quote(text: string): string {
   return text.length > 60 ? `"${text.slice(0, 57)}…"` : `"${text}"`;
 }
@@ -39,8 +44,18 @@ export const parseMessages = {
   commaAndPoint(text: string): string {
     return `cannot read ${quote(text)}: it mixes a decimal comma and a decimal point; use one decimal separator, e.g. 7.5+j2.25 or 7,5+j2,25`;
   },
-  ambiguousComma(text: string): string {
-    return `cannot read ${quote(text)}: the comma could be a thousands separator or a decimal comma; write 1000 or 1.000 (no thousands separators)`;
+  ambiguousComma(text: string, commas: number, thousands: string, decimal: string): string {
+    const [sep, dec] = commas === 1 ? ['a thousands separator', 'a decimal comma'] : ['thousands separators', 'decimal commas'];
+    return `cannot read ${quote(text)}: with ${sep} it is ${clip(thousands)}, with ${dec} ${clip(decimal)}; write it as one of these`;
+  },
+  thousandsSeparators(text: string, plain: string): string {
+    return `cannot read ${quote(text)}: thousands separators are not read; write it as ${clip(plain)}`;
+  },
+  complexInVar(text: string): string {
+    return `cannot read ${quote(text)}: var is reactive power alone (40 kvar means j40 kvar), so a value in var has no real part; for a complex power write it in VA, e.g. 8+j6 kVA`;
+  },
+  imaginaryInWatts(text: string): string {
+    return `cannot read ${quote(text)}: W is real power alone, so a value in W has no imaginary part; for a complex power write it in VA, e.g. 8+j6 kVA`;
   },
   wrongQuantity(text: string, got: Quantity, expected: Quantity): string {
     return `${quote(text)} is ${article(got)} ${got} but ${article(expected)} ${expected} is expected here; give it in ${UNIT_OF[expected]} or without a unit`;

@@ -1,4 +1,24 @@
 /** Messages of the argument readers and the shared function guard. */
+import type { Quantity, UnitSymbol } from '../parse';
+
+/** What a value in each unit is, for messages. */
+const MEANING: Record<UnitSymbol, string> = {
+  V: 'a voltage',
+  A: 'a current',
+  Ω: 'an impedance',
+  S: 'an admittance',
+  W: 'a real power',
+  var: 'a reactive power',
+  VA: 'a complex or apparent power',
+};
+
+function clip(text: string): string {
+  return text.length > 40 ? `${text.slice(0, 37)}…` : text;
+}
+
+function article(word: string): string {
+  return /^[aeiou]/.test(word) ? 'an' : 'a';
+}
 
 export const readerMessages = {
   blankRequired(where: string): string {
@@ -45,6 +65,18 @@ export const readerMessages = {
   },
   numberExpected(where: string, got: string): string {
     return `${where} must be a number but is ${got}: give a plain number`;
+  },
+  numberWithUnitExpected(where: string, got: string, units: readonly UnitSymbol[]): string {
+    return `${where} must be a number but is ${got}: give a number, with or without a unit (${units.join(', ')})`;
+  },
+  unitRefused(where: string, text: string, unit: UnitSymbol, allowed: readonly UnitSymbol[]): string {
+    const is = `${where} is "${clip(text)}", ${MEANING[unit]} in ${unit}`;
+    if (allowed.length === 0) return `${is}, but takes a plain number: give it without a unit`;
+    const takes = allowed.map((u) => `${MEANING[u]} in ${u}`).join(' or ');
+    return `${is}, but takes ${takes}: give it in ${allowed.join(' or ')} or as a plain number`;
+  },
+  mixedQuantities(where: string, text: string, quantity: Quantity, firstWhere: string, firstText: string, firstQuantity: Quantity): string {
+    return `${where} ("${clip(text)}") is ${article(quantity)} ${quantity} but ${firstWhere} ("${clip(firstText)}") is ${article(firstQuantity)} ${firstQuantity}: the values of one sum must be one quantity; check the units`;
   },
   numberRequired(where: string): string {
     return `${where} is blank: a number is required here`;

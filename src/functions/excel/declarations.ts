@@ -54,7 +54,7 @@ export function FROMRECT(real: any[][], imag: any[][], digits?: any): any[][] {
 }
 
 /**
- * Magnitude |z| of each phasor, as a number at full precision.
+ * Magnitude |z| of each phasor, as a number.
  * @customfunction MAG
  * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @returns {any[][]} Numbers in the phasor’s own unit (V, A, Ω …); one row per phasor.
@@ -68,7 +68,7 @@ export function MAG(z: any[][]): any[][] {
  * @customfunction ANGLE
  * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [unit] "deg" (default) or "rad".
- * @returns {any[][]} Numbers at full precision; one row per phasor.
+ * @returns {any[][]} Numbers; one row per phasor.
  */
 export function ANGLE(z: any[][], unit?: any): any[][] {
   return invoke('ANGLE', [z, unit]);
@@ -78,7 +78,7 @@ export function ANGLE(z: any[][], unit?: any): any[][] {
  * Real part of each phasor (resistance of an impedance, active power of a complex power).
  * @customfunction REAL
  * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
- * @returns {any[][]} Numbers at full precision; one row per phasor.
+ * @returns {any[][]} Numbers; one row per phasor.
  */
 export function REAL(z: any[][]): any[][] {
   return invoke('REAL', [z]);
@@ -88,7 +88,7 @@ export function REAL(z: any[][]): any[][] {
  * Imaginary part of each phasor (reactance of an impedance, reactive power of a complex power).
  * @customfunction IMAG
  * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
- * @returns {any[][]} Numbers at full precision; one row per phasor.
+ * @returns {any[][]} Numbers; one row per phasor.
  */
 export function IMAG(z: any[][]): any[][] {
   return invoke('IMAG', [z]);
@@ -99,7 +99,7 @@ export function IMAG(z: any[][]): any[][] {
  * @customfunction SPLIT
  * @param {any[][]} z Phasors in any notation: text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
  * @param {any} [form] "rect" (default) or "polar".
- * @returns {any[][]} An n×2 block of numbers at full precision, one row per phasor.
+ * @returns {any[][]} An n×2 block of numbers, one row per phasor.
  */
 export function SPLIT(z: any[][], form?: any): any[][] {
   return invoke('SPLIT', [z, form]);
@@ -113,6 +113,16 @@ export function SPLIT(z: any[][], form?: any): any[][] {
  */
 export function ADD(z1: any[][][]): any[][] {
   return invoke('ADD', [z1]);
+}
+
+/**
+ * PHZ.ADD to 15 significant figures: the phasor sum of every value given, for chains whose later steps need the figures.
+ * @customfunction ADDFULL
+ * @param {any[][][]} z1 Phasors to add: one or more cells, ranges or values (blanks are skipped).
+ * @returns {any[][]} One phasor, polar text to 15 significant figures.
+ */
+export function ADDFULL(z1: any[][][]): any[][] {
+  return invoke('ADDFULL', [z1]);
 }
 
 /**
@@ -135,6 +145,16 @@ export function SUB(a: any[][], b: any[][], digits?: any): any[][] {
  */
 export function MUL(z1: any[][][]): any[][] {
   return invoke('MUL', [z1]);
+}
+
+/**
+ * PHZ.MUL to 15 significant figures: the product of every value given, for chains whose later steps need the figures.
+ * @customfunction MULFULL
+ * @param {any[][][]} z1 Phasors to multiply: one or more cells, ranges or values (blanks are skipped).
+ * @returns {any[][]} One phasor, polar text to 15 significant figures.
+ */
+export function MULFULL(z1: any[][][]): any[][] {
+  return invoke('MULFULL', [z1]);
 }
 
 /**
@@ -179,6 +199,16 @@ export function INV(z: any[][], digits?: any): any[][] {
  */
 export function PARALLEL(z1: any[][][]): any[][] {
   return invoke('PARALLEL', [z1]);
+}
+
+/**
+ * PHZ.PARALLEL to 15 significant figures: branches in parallel, 1 / Σ(1/Zk), for chains whose later steps need the figures.
+ * @customfunction PARALLELFULL
+ * @param {any[][][]} z1 Branch impedances: one or more cells, ranges or values (blanks are skipped).
+ * @returns {any[][]} One impedance, polar text to 15 significant figures.
+ */
+export function PARALLELFULL(z1: any[][][]): any[][] {
+  return invoke('PARALLELFULL', [z1]);
 }
 
 /**
@@ -281,7 +311,7 @@ export function CURRENT(voltage: any[][], impedance: any[][], digits?: any): any
 /**
  * Complex power S = P + jQ from real power and power factor, row by row.
  * @customfunction COMPLEXPOWER
- * @param {any[][]} real_power Real power P, e.g. 7360 for 7.36 kW (a number or a column of numbers).
+ * @param {any[][]} real_power Real power P in W, e.g. 7360 or "7.36 kW" (a number or a column of numbers).
  * @param {any[][]} power_factor Power factor, above 0 and at most 1 (a number or a column).
  * @param {any} [leading] TRUE for a leading (capacitive) load; default FALSE (lagging).
  * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
@@ -362,6 +392,16 @@ export function DELTALOAD(line_voltages: any[][], impedances: any[][], line?: an
  */
 export function NEUTRAL(i1: any[][][]): any[][] {
   return invoke('NEUTRAL', [i1]);
+}
+
+/**
+ * PHZ.NEUTRAL to 15 significant figures: the neutral current I1 + I2 + I3, for chains whose later steps need the figures.
+ * @customfunction NEUTRALFULL
+ * @param {any[][][]} i1 Phase currents: one range of three, a three-column range, or i1, i2, i3 (cells, columns or pairs).
+ * @returns {any[][]} Polar text to 15 significant figures: one neutral current, or one per row.
+ */
+export function NEUTRALFULL(i1: any[][][]): any[][] {
+  return invoke('NEUTRALFULL', [i1]);
 }
 
 /**

@@ -11,9 +11,10 @@ export const COMPLEXPOWER = defineFunction({
   details:
     'Q = P·tan(acos pf) = P·√(1 − pf²)/pf, positive for a lagging (inductive) load, negative when leading is TRUE ' +
     '(the convention S = V·I*). The power factor is the magnitude, above 0 and at most 1. A negative P (power ' +
-    'delivered) gives Q of the opposite sign by the same formula. Units follow P: W give VA.',
+    'delivered) gives Q of the opposite sign by the same formula. Units follow P: W give VA. real_power may carry its ' +
+    'unit, "4 kW" or "0,5 MW"; a value in var or VA is refused, since it is not a real power.',
   params: [
-    { name: 'real_power', type: 'matrix', description: 'Real power P, e.g. 7360 for 7.36 kW (a number or a column of numbers).' },
+    { name: 'real_power', type: 'matrix', description: 'Real power P in W, e.g. 7360 or "7.36 kW" (a number or a column of numbers).' },
     { name: 'power_factor', type: 'matrix', description: 'Power factor, above 0 and at most 1 (a number or a column).' },
     { name: 'leading', type: 'scalar', optional: true, description: 'TRUE for a leading (capacitive) load; default FALSE (lagging).' },
     DIGITS,
@@ -27,7 +28,7 @@ export const COMPLEXPOWER = defineFunction({
   implementation: (realPower, powerFactor, leading, digits) => {
     const d = readDigits(digits);
     const lead = readBoolean(leading, 'leading', false);
-    const ps = readNumbers(realPower, 'real_power');
+    const ps = readNumbers(realPower, 'real_power', { units: ['W'] });
     const pfs = readNumbers(powerFactor, 'power_factor');
     const many = pfs.length > 1;
     return phasorColumn(

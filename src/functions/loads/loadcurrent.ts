@@ -11,7 +11,8 @@ export const LOADCURRENT = defineFunction({
   details:
     'From S = V·I*. Give the voltage across the load (line-to-neutral for a star phase, line-to-line for a delta ' +
     'branch) and that load’s own S; VA and V give A. With COMPLEXPOWER this turns a panel schedule of kW and power ' +
-    'factor into phase currents.',
+    'factor into phase currents. A power in var is reactive power: "40 kvar" and "j40 kvar" are both S = j40 000 VA; ' +
+    'a power in W is real; give a complex power in VA ("8+j6 kVA").',
   params: [phasorParam('voltage', 'Voltages across the loads (not 0)'), phasorParam('power', 'Complex powers S = P + jQ'), DIGITS],
   result: 'Polar text, one row per pair.',
   errors: ['A zero voltage, a blank cell, text that is not a phasor, or different counts give #VALUE!.'],

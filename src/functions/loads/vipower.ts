@@ -8,7 +8,9 @@ export const VIPOWER = defineFunction({
   name: 'VIPOWER',
   group: 'loads',
   summary: 'Complex power S = V·I*, row by row: real part P (W), imaginary part Q (var, positive when inductive).',
-  details: 'With V in volts and I in amperes, S is in VA. Use PHZ.REAL and PHZ.IMAG for P and Q at full precision.',
+  details:
+    'With V in volts and I in amperes, S is in VA. P and Q are PHZ.REAL and PHZ.IMAG of S; ask for 15 digits when ' +
+    'you take them, PHZ.REAL(PHZ.VIPOWER(V, I, 15)), since the 6-figure text gives them to 6 figures only.',
   params: [phasorParam('voltage', 'Voltages across the loads'), phasorParam('current', 'Currents into the loads'), DIGITS],
   result: 'Polar text, one row per pair.',
   errors: ['A blank cell, text that is not a phasor, or different counts give #VALUE!.'],

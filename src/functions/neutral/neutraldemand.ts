@@ -27,5 +27,5 @@ export const NEUTRALDEMAND = defineFunction({
     { formula: '=PHZ.NEUTRALDEMAND(300)', result: [[270]] },
     { formula: '=PHZ.NEUTRALDEMAND(300, 50)', result: [[320]] },
   ],
-  implementation: (unbalanced, nonlinear) => [[neutralDemand(readNumber(unbalanced, 'unbalanced_load'), readNumber(nonlinear, 'nonlinear_load', { default: 0 }))]],
+  implementation: (unbalanced, nonlinear) => [[neutralDemand(readNumber(unbalanced, 'unbalanced_load', { units: ['A'] }), readNumber(nonlinear, 'nonlinear_load', { default: 0, units: ['A'] }))]],
 });

@@ -30,7 +30,7 @@ export const SIZINGCURRENT = defineFunction({
     { formula: '=PHZ.SIZINGCURRENT(43, 50)', result: [[64.5, 1, 'neutral']] },
   ],
   implementation: (designCurrent, pct) => {
-    const r = sizingCurrent(readNumber(designCurrent, 'design_current'), readNumber(pct, 'third_harmonic_pct'));
+    const r = sizingCurrent(readNumber(designCurrent, 'design_current', { units: ['A'] }), readNumber(pct, 'third_harmonic_pct'));
     return [[r.current, r.factor, r.basis]];
   },
 });

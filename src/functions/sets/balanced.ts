@@ -32,7 +32,7 @@ export const BALANCED = defineFunction({
   ],
   implementation: (magnitude, sequence, angle, digits) => {
     const d = readDigits(digits);
-    const m = readNumber(magnitude, 'magnitude');
+    const m = readNumber(magnitude, 'magnitude', { units: ['V', 'A'] });
     if (m < 0) throw new PhzError(M.negativeMagnitude('magnitude', m));
     const seq = readChoice(sequence, 'sequence', ['positive', 'negative'] as const, 'positive');
     const a = readNumber(angle, 'angle', { default: 0 });

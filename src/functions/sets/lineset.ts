@@ -33,7 +33,7 @@ export const LINESET = defineFunction({
   ],
   implementation: (magnitudes, angle, digits) => {
     const d = readDigits(digits);
-    const m = readNumbers(magnitudes, 'magnitudes');
+    const m = readNumbers(magnitudes, 'magnitudes', { units: ['V'] });
     if (m.length !== 3) throw new PhzError(M.needThree('magnitudes', m.length, '|V12|, |V23|, |V31|'));
     const a = readNumber(angle, 'angle', { default: 30 });
     return setColumn(lineSetFromMagnitudes([m[0], m[1], m[2]], a, 'magnitudes'), d);

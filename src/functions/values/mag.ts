@@ -1,13 +1,14 @@
 import { magnitude } from '../../core/phasor';
 import { defineFunction } from '../spec';
 import { column, readPhasors } from '../readers';
-import { phasorParam } from '../params';
+import { READS_TEXT_NOTE, phasorParam } from '../params';
 
-/** Magnitude |z| of each phasor, full precision. */
+/** Magnitude |z| of each phasor. */
 export const MAG = defineFunction({
   name: 'MAG',
   group: 'values',
-  summary: 'Magnitude |z| of each phasor, as a number at full precision.',
+  summary: 'Magnitude |z| of each phasor, as a number.',
+  details: READS_TEXT_NOTE,
   params: [phasorParam('z', 'Phasors in any notation')],
   result: 'Numbers in the phasor’s own unit (V, A, Ω …); one row per phasor.',
   errors: ['A blank cell or text that is not a phasor gives #VALUE! naming the cell.'],

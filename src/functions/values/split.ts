@@ -1,18 +1,19 @@
 import { angleDeg, magnitude } from '../../core/phasor';
 import { defineFunction } from '../spec';
 import { readChoice, readPhasors } from '../readers';
-import { phasorParam } from '../params';
+import { READS_TEXT_NOTE, phasorParam } from '../params';
 
 /** Splits phasors into two numeric columns: real/imaginary, or magnitude/degrees. */
 export const SPLIT = defineFunction({
   name: 'SPLIT',
   group: 'values',
   summary: 'Splits phasors into two numeric columns: real and imaginary, or with "polar" magnitude and angle in degrees.',
+  details: READS_TEXT_NOTE,
   params: [
     phasorParam('z', 'Phasors in any notation'),
     { name: 'form', type: 'scalar', optional: true, description: '"rect" (default) or "polar".' },
   ],
-  result: 'An n×2 block of numbers at full precision, one row per phasor.',
+  result: 'An n×2 block of numbers, one row per phasor.',
   errors: ['A blank cell, text that is not a phasor, or an unknown form gives #VALUE!.'],
   examples: [
     { formula: '=PHZ.SPLIT("3-j4")', result: [[3, -4]] },

@@ -140,6 +140,12 @@ describe('PHZ.LINESET', () => {
     expectClose(magnitude(r[1]), 395, 1e-14);
     expectClose(angleDeg(r[0]), 0);
   });
+  it('unit words: magnitudes in V or kV are read, a current is refused', () => {
+    const r = phs(call('LINESET', col('0.402 kV', '395 V', 385), 0, 15));
+    expectClose(magnitude(r[0]), 402, 1e-14);
+    expectClose(magnitude(r[1]), 395, 1e-14);
+    expectMessage(() => call('LINESET', col(400, '5 A', 400)), /magnitudes, row 2/);
+  });
   it('blank cell: a blank magnitude is an error; a blank angle is the default 30°', () => {
     expectMessage(() => call('LINESET', col(400, null, 400)), /magnitudes, row 2 is blank/);
     expectClose(angleDeg(ph(call('LINESET', col(400, 400, 400), '', 15)[0][0])), 30);
