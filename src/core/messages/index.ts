@@ -7,3 +7,4 @@ export { readerMessages } from './readers';
 export { valueMessages } from './values';
 export { threePhaseMessages } from './threephase';
 export { plotMessages } from './plot';
+export { feederMessages } from './feeders';
