@@ -86,7 +86,8 @@ export function dropFourWire(supply: Triple<Phasor>, currents: Triple<Phasor>, z
     const line = z.mul(currents[k]).mul(length);
     const d = line.add(vN);
     const u = e.sub(d);
-    const volts = em - magnitude(u);
+    // |E| − |U| = (|E|² − |U|²)/(|E| + |U|) = (2·Re(E·D*) − |D|²)/(|E| + |U|): no cancellation of nearly equal magnitudes
+    const volts = (2 * (e.re * d.re + e.im * d.im) - (d.re * d.re + d.im * d.im)) / (em + magnitude(u));
     // Annex G, b = 1: |I|·L·(R cos φ + X sin φ) = Re(z·L·I·e^(−j∠E)), φ from E_k to I_k
     const ref = angleRad(e);
     const approx = line.re * Math.cos(ref) + line.im * Math.sin(ref);

@@ -76,7 +76,7 @@ export const VOLTDROP = defineFunction({
     'Systems: "1P" single-phase two-wire (the drop is along the line and the return conductor); "3P" three-phase, balanced; "3P4W" ' +
     'three-phase four-wire with the actual neutral current. impedance is R + jX of one line conductor per unit length (Ω/km with ' +
     'length in km, or Ω/m with m: any one length unit) at its operating temperature; neutral_impedance that of the return or neutral ' +
-    'conductor (default the same). Annex G approximation: u = b·(R cos φ + X sin φ)·L·I with b = 2 for 1P and b = 1 per phase for ' +
+    'conductor (default the same). IEC 60364-5-52 Annex G approximation: u = b·(R cos φ + X sin φ)·L·I with b = 2 for 1P and b = 1 per phase for ' +
     'three-phase, Δu = 100·u/U0; shown for 3P in line-to-line volts (√3·I·L·(R cos φ + X sin φ); the percentage is the same). ' +
     '1P and 3P: current is the load current in A (a number or "63 A"), or the load in W or VA ("40 kW", "50 kVA"), turned into a current ' +
     'at the nominal voltage (I = S/V for 1P, S/(√3·V) for 3P; W through the power factor); power_factor is the load’s, lagging unless ' +
