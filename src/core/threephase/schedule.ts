@@ -77,7 +77,20 @@ export type ConnectionReading = { readonly ok: true; readonly connection: Connec
  * Numbers read as their digits (12 is lines 1-2).
  */
 export function parseConnection(text: string | number): ConnectionReading {
-  let t = String(text).toUpperCase().replace(/[\s\u00a0]+/g, '').replace(/[\u2010-\u2015\u2212]/g, '-');
+  const key = typeof text === 'string' ? text : String(text);
+  const known = READINGS.get(key);
+  if (known !== undefined) return known;
+  const r = readConnectionText(key);
+  // schedules repeat a few spellings: remember them (the readings are immutable)
+  if (READINGS.size >= 4096) READINGS.clear();
+  READINGS.set(key, r);
+  return r;
+}
+
+const READINGS = new Map<string, ConnectionReading>();
+
+function readConnectionText(text: string): ConnectionReading {
+  let t = text.toUpperCase().replace(/[\s\u00a0]+/g, '').replace(/[\u2010-\u2015\u2212]/g, '-');
   if (THREE_WORDS.has(t)) return { ok: true, connection: THREE };
   // a trailing neutral: L1-N, AN, 1N
   const withNeutral = /^(.+?)-?N$/.exec(t);
@@ -124,8 +137,8 @@ export interface ScheduleCircuit {
   readonly im: number;
   /** Share of the load that is non-linear, 0 to 1. */
   readonly nonlinear: number;
-  /** Where the circuit sits, for messages (`connections, row 7`). */
-  readonly at: string;
+  /** Where the circuit sits, for messages (`connections, row 7`); made only when a message needs it. */
+  readonly at: () => string;
 }
 
 export interface ScheduleResult {
@@ -178,7 +191,7 @@ export function aggregateSchedule(supply: Triple<Phasor>, circuits: readonly Sch
   const si = [0, 0, 0, 0, 0, 0, 0];
   const sAbs = [0, 0, 0, 0, 0, 0, 0];
   const nlAbs = [0, 0, 0];
-  const first: Array<string | undefined> = new Array<string | undefined>(7);
+  const first: Array<(() => string) | undefined> = new Array<(() => string) | undefined>(7);
   let loaded = false;
   for (let c = 0; c < circuits.length; c++) {
     const x = circuits[c];
@@ -210,7 +223,7 @@ export function aggregateSchedule(supply: Triple<Phasor>, circuits: readonly Sch
     // a voltage below 1e-12 of the supply is rounding noise of a difference: 0 V
     const vScale = g < 3 ? 0 : magnitudeOf(supply[0].re, supply[0].im) + magnitudeOf(supply[1].re, supply[1].im) + magnitudeOf(supply[2].re, supply[2].im);
     const vm = magnitudeOf(v.re, v.im);
-    if (vm === 0 || vm <= NOISE_REL * vScale) throw new PhzError(M.zeroSupply(first[g] as string, GROUP_VOLTAGE[g]));
+    if (vm === 0 || vm <= NOISE_REL * vScale) throw new PhzError(M.zeroSupply((first[g] as () => string)(), GROUP_VOLTAGE[g]));
     // I = (S/V)*; the three-phase set carries S/3 per phase
     groupCurrents.push((g === 6 ? s.div(3) : s).div(v).conjugate());
   }

@@ -22,6 +22,10 @@ export function readSupply(arg: unknown, name = 'supply'): Triple<Phasor> {
   return [zs[0], zs[1], zs[2]];
 }
 
+/** Where a cell sits, for messages: text, or a function that makes it only when a message needs it. */
+export type At = string | (() => string);
+const where = (at: At): string => (typeof at === 'string' ? at : at());
+
 /** One schedule column: its cells in order and where each sits, for messages. */
 export interface Column {
   readonly cells: readonly unknown[];
@@ -39,20 +43,20 @@ export function scheduleColumn(arg: unknown, name: string): Column {
 }
 
 /** A cell that is neither number nor text: an error names itself, anything else is described. */
-function refuse(v: unknown, at: string, text: (got: string) => string): PhzError {
+function refuse(v: unknown, at: At, text: (got: string) => string): PhzError {
   if (typeof v === 'object' && v !== null) {
     const error = errorName(v);
-    return new PhzError(error === undefined ? text(describeObject(v)) : R.errorValue(at, error));
+    return new PhzError(error === undefined ? text(describeObject(v)) : R.errorValue(where(at), error));
   }
   return new PhzError(text(typeof v === 'boolean' ? (v ? 'TRUE' : 'FALSE') : String(v)));
 }
 
 /** A number in text with an optional unit word (the parser's rules: prefixes, decimal comma); NaN when not one. */
-function numberText(text: string, at: string, seen: UnitSeen): number {
+function numberText(text: string, at: At, seen: UnitSeen): number {
   try {
     return parseNumberText(text, seen);
   } catch (e) {
-    throw new PhzError(R.inCell(at, (e as Error).message));
+    throw new PhzError(R.inCell(where(at), (e as Error).message));
   }
 }
 
@@ -63,23 +67,23 @@ export interface LoadReading {
 }
 
 /** A load cell: a number is W; text may carry W, kW, VA, kVA (any SI prefix). Blank → null. */
-export function readLoad(v: unknown, at: string): LoadReading | null {
+export function readLoad(v: unknown, at: At): LoadReading | null {
   if (isBlank(v)) return null;
   let value: number;
   let apparent = false;
   if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new PhzError(R.notFinite(at));
+    if (!Number.isFinite(v)) throw new PhzError(R.notFinite(where(at)));
     value = v;
   } else if (typeof v === 'string') {
     const seen: UnitSeen = { unit: null };
     value = numberText(v.trim(), at, seen);
-    if (Number.isNaN(value)) throw new PhzError(M.loadText(at, v.trim()));
-    if (seen.unit !== null && seen.unit !== 'W' && seen.unit !== 'VA') throw new PhzError(M.loadUnit(at, v.trim(), seen.unit));
+    if (Number.isNaN(value)) throw new PhzError(M.loadText(where(at), v.trim()));
+    if (seen.unit !== null && seen.unit !== 'W' && seen.unit !== 'VA') throw new PhzError(M.loadUnit(where(at), v.trim(), seen.unit));
     apparent = seen.unit === 'VA';
   } else {
-    throw refuse(v, at, (got) => M.loadText(at, got));
+    throw refuse(v, at, (got) => M.loadText(where(at), got));
   }
-  if (value < 0) throw new PhzError(M.loadNegative(at, value));
+  if (value < 0) throw new PhzError(M.loadNegative(where(at), value));
   return { value, apparent };
 }
 
@@ -95,12 +99,12 @@ const PF_WORD = /^(.*?)\s*(lagging|lag|inductive|ind|leading|lead|capacitive|cap
  * `lead`/`leading` (also `ind`/`inductive` and `cap`/`capacitive`). A negative value is
  * refused, never read as leading. Blank → null.
  */
-export function readPowerFactor(v: unknown, at: string): PowerFactorReading | null {
+export function readPowerFactor(v: unknown, at: At): PowerFactorReading | null {
   if (isBlank(v)) return null;
   let pf: number;
   let leading = false;
   if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new PhzError(R.notFinite(at));
+    if (!Number.isFinite(v)) throw new PhzError(R.notFinite(where(at)));
     pf = v;
   } else if (typeof v === 'string') {
     const t = v.trim();
@@ -109,33 +113,33 @@ export function readPowerFactor(v: unknown, at: string): PowerFactorReading | nu
     if (word) leading = /^(lead|cap)/i.test(word[2]);
     const seen: UnitSeen = { unit: null };
     pf = num === '' ? NaN : numberText(num, at, seen);
-    if (Number.isNaN(pf) || seen.unit !== null) throw new PhzError(M.powerFactorText(at, t));
+    if (Number.isNaN(pf) || seen.unit !== null) throw new PhzError(M.powerFactorText(where(at), t));
   } else {
-    throw refuse(v, at, (got) => M.powerFactorText(at, got));
+    throw refuse(v, at, (got) => M.powerFactorText(where(at), got));
   }
-  if (pf < 0) throw new PhzError(M.powerFactorNegative(at, pf));
-  if (!(pf > 0 && pf <= 1)) throw new PhzError(M.powerFactorRange(at, pf));
+  if (pf < 0) throw new PhzError(M.powerFactorNegative(where(at), pf));
+  if (!(pf > 0 && pf <= 1)) throw new PhzError(M.powerFactorRange(where(at), pf));
   return { pf, leading };
 }
 
 /** A share from 0 to 1: a number, or text with % (40 % → 0.4). Blank → null. */
-export function readFraction(v: unknown, at: string, what: string): number | null {
+export function readFraction(v: unknown, at: At, what: string): number | null {
   if (isBlank(v)) return null;
   let x: number;
   if (typeof v === 'number') {
-    if (!Number.isFinite(v)) throw new PhzError(R.notFinite(at));
+    if (!Number.isFinite(v)) throw new PhzError(R.notFinite(where(at)));
     x = v;
   } else if (typeof v === 'string') {
     const t = v.trim();
     const percent = /^(.*?)\s*%$/.exec(t);
     const seen: UnitSeen = { unit: null };
     const n = numberText(percent ? percent[1] : t, at, seen);
-    if (Number.isNaN(n) || seen.unit !== null) throw new PhzError(M.fractionText(at, t, what));
+    if (Number.isNaN(n) || seen.unit !== null) throw new PhzError(M.fractionText(where(at), t, what));
     x = percent ? n / 100 : n;
   } else {
-    throw refuse(v, at, (got) => M.fractionText(at, got, what));
+    throw refuse(v, at, (got) => M.fractionText(where(at), got, what));
   }
-  if (!(x >= 0 && x <= 1)) throw new PhzError(M.fraction(at, x, what));
+  if (!(x >= 0 && x <= 1)) throw new PhzError(M.fraction(where(at), x, what));
   return x;
 }
 
@@ -149,14 +153,14 @@ export function loadPower(load: LoadReading, pf: PowerFactorReading, demand = 1)
 }
 
 /** A column that is one value for every circuit or one per circuit. */
-function pick(col: Column | null, n: number, name: string, counts: Array<[string, number]>): ((i: number) => { v: unknown; at: string }) | null {
+function pick(col: Column | null, n: number, name: string, counts: Array<[string, number]>): ((i: number) => { v: unknown; at: At }) | null {
   if (col === null) return null;
   const len = col.cells.length;
   if (len !== 1 && len !== n) {
     counts.push([name, len]);
     return null;
   }
-  return (i) => (len === 1 ? { v: col.cells[0], at: col.at(0) } : { v: col.cells[i], at: col.at(i) });
+  return (i) => (len === 1 ? { v: col.cells[0], at: () => col.at(0) } : { v: col.cells[i], at: () => col.at(i) });
 }
 
 export interface ScheduleColumns {
@@ -190,18 +194,18 @@ export function readCircuits(cols: ScheduleColumns): ReadSchedule {
   const circuits: ScheduleCircuit[] = [];
   let firstNonlinear: string | null = null;
   for (let i = 0; i < n; i++) {
-    const loadAt = cols.loads.at(i);
-    const load = readLoad(cols.loads.cells[i], loadAt);
+    const load = readLoad(cols.loads.cells[i], () => cols.loads.at(i));
     if (load === null || load.value === 0) continue;
-    const connection = readConnection(cols.connections.cells[i], cols.connections.at(i));
-    const p = (pf as (i: number) => { v: unknown; at: string })(i);
+    const at = (): string => cols.connections.at(i);
+    const connection = readConnection(cols.connections.cells[i], at);
+    const p = (pf as (i: number) => { v: unknown; at: At })(i);
     const factor = readPowerFactor(p.v, p.at);
-    if (factor === null) throw new PhzError(M.powerFactorBlank(p.at));
+    if (factor === null) throw new PhzError(M.powerFactorBlank(where(p.at)));
     let share = 0;
     if (nl) {
       const c = nl(i);
       share = readFraction(c.v, c.at, 'a non-linear share') ?? 0;
-      if (share > 0 && firstNonlinear === null) firstNonlinear = c.at;
+      if (share > 0 && firstNonlinear === null) firstNonlinear = where(c.at);
     }
     let d = 1;
     if (dm) {
@@ -209,17 +213,17 @@ export function readCircuits(cols: ScheduleColumns): ReadSchedule {
       d = readFraction(c.v, c.at, 'a demand factor') ?? 1;
     }
     const s = loadPower(load, factor, d);
-    circuits.push({ group: groupOf(connection), re: s.re, im: s.im, nonlinear: share, at: cols.connections.at(i) });
+    circuits.push({ group: groupOf(connection), re: s.re, im: s.im, nonlinear: share, at });
   }
   return { circuits, firstNonlinear };
 }
 
 /** One connection cell; blank or unknown is an error naming it. */
-export function readConnection(v: unknown, at: string): Connection {
-  if (isBlank(v)) throw new PhzError(M.connectionBlank(at));
-  if (typeof v !== 'string' && typeof v !== 'number') throw refuse(v, at, (got) => M.connection(at, got));
+export function readConnection(v: unknown, at: At): Connection {
+  if (isBlank(v)) throw new PhzError(M.connectionBlank(where(at)));
+  if (typeof v !== 'string' && typeof v !== 'number') throw refuse(v, at, (got) => M.connection(where(at), got));
   const r = parseConnection(v);
   if (r.ok) return r.connection;
   const text = String(v).trim();
-  throw new PhzError(r.repeated ? M.connectionRepeated(at, text) : M.connection(at, text));
+  throw new PhzError(r.repeated ? M.connectionRepeated(where(at), text) : M.connection(where(at), text));
 }

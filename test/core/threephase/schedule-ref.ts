@@ -37,7 +37,7 @@ export interface RefCircuit {
 export function refPower(c: RefCircuit): MComplex {
   const phi = Math.acos(c.pf);
   const s = (c.apparent ? c.load : c.load / c.pf) * c.demand;
-  return math.complex({ abs: s, arg: c.leading ? -phi : phi }) as MComplex;
+  return math.complex({ r: s, phi: c.leading ? -phi : phi }) as MComplex;
 }
 
 export interface RefResult {
@@ -51,7 +51,7 @@ export interface RefResult {
   nonlinearCurrent: number[];
 }
 
-const A = math.complex({ abs: 1, arg: (2 * Math.PI) / 3 }) as MComplex;
+const A = math.complex({ r: 1, phi: (2 * Math.PI) / 3 }) as MComplex;
 
 /** Circuit by circuit: the documented model, one current per circuit. */
 export function circuitByCircuit(supply: C[], circuits: readonly RefCircuit[]): RefResult {
@@ -72,18 +72,18 @@ export function circuitByCircuit(supply: C[], circuits: readonly RefCircuit[]): 
     total = math.add(total, s) as MComplex;
     const conn = c.connection;
     if (conn.kind === 'ln') {
-      const i = math.conj(math.divide(s, e[conn.phase])) as MComplex;
+      const i = math.conj(math.divide(s, e[conn.phase]) as MComplex) as MComplex;
       addTo(conn.phase, i);
       neutral = math.add(neutral, i) as MComplex;
       lnLoad[conn.phase] += (math.abs(s) as unknown as number) / (math.abs(e[conn.phase]) as unknown as number);
       nonlinearCurrent[conn.phase] += c.nonlinear * (math.abs(i) as unknown as number);
     } else if (conn.kind === 'll') {
       const v = math.subtract(e[conn.from], e[conn.to]) as MComplex;
-      const i = math.conj(math.divide(s, v)) as MComplex;
+      const i = math.conj(math.divide(s, v) as MComplex) as MComplex;
       addTo(conn.from, i);
       addTo(conn.to, math.unaryMinus(i) as MComplex);
     } else {
-      const i1 = math.conj(math.divide(math.divide(s, 3), vPos)) as MComplex;
+      const i1 = math.conj(math.divide(math.divide(s, 3) as MComplex, vPos) as MComplex) as MComplex;
       addTo(0, i1);
       addTo(1, math.multiply(math.multiply(A, A), i1) as MComplex);
       addTo(2, math.multiply(A, i1) as MComplex);
@@ -125,7 +125,7 @@ export function nodalSchedule(supply: C[], circuits: readonly RefCircuit[]): { l
     } else {
       // three arms, each taking S/3 at the phase voltage of a balanced supply
       const m = math.abs(e[0]) as unknown as number;
-      const adm = math.divide(math.conj(math.divide(s, 3)), m * m) as MComplex;
+      const adm = math.divide(math.conj(math.divide(s, 3) as MComplex), m * m) as MComplex;
       for (let k = 0; k < 3; k++) branch(k, internal, adm);
       internal++;
     }

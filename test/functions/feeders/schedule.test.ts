@@ -136,7 +136,7 @@ describe('PHZ.SCHEDULE', () => {
     const both = call('SCHEDULE', E208, col('A', 'B', 'AB'), col('1941 VA', '1941 VA', '14900 VA'), 1, null, null, null, null, 15);
     const i1 = both[0][1] as number;
     // the arithmetic sum bounds the phasor sum; mathjs gives the phasor sum: (1941/E∠0)* + (14900/208∠30°)*
-    const ref = math.add(math.complex(1941 / E208, 0), math.complex({ abs: 14900 / 208, arg: -Math.PI / 6 })) as math.Complex;
+    const ref = math.add(math.complex(1941 / E208, 0), math.complex({ r: 14900 / 208, phi: -Math.PI / 6 })) as math.Complex;
     expectClose(i1, math.abs(ref) as unknown as number, 1e-12);
     expect(i1).toBeLessThan(87.8);
     expect(Math.abs(i1 - 86.0)).toBeLessThan(0.05);
@@ -196,7 +196,7 @@ describe('PHZ.SCHEDULE', () => {
       // rms: each order's neutral component Σ_k p·(Σ share·|I|)_k ∠ h·∠E_k, root-sum-square with the fundamental
       let sumSq = (math.abs(ref.neutral) as unknown as number) ** 2;
       for (const [h, p] of harmonics) {
-        const z = [0, 1, 2].reduce<math.Complex>((acc, k) => math.add(acc, math.complex({ abs: (p / 100) * ref.nonlinearCurrent[k], arg: h * e[k].arg() })) as math.Complex, math.complex(0, 0));
+        const z = [0, 1, 2].reduce<math.Complex>((acc, k) => math.add(acc, math.complex({ r: (p / 100) * ref.nonlinearCurrent[k], phi: h * e[k].arg() })) as math.Complex, math.complex(0, 0));
         sumSq += (math.abs(z) as unknown as number) ** 2;
       }
       expectClose(t[3][1] as number, Math.sqrt(sumSq), 1e-11);

@@ -15,7 +15,7 @@ const drop = (...args: unknown[]): Row => call('VOLTDROP', ...args)[0] as Row;
 
 /** Load-end voltage |U_r| of a path with impedance z carrying |I| at pf (lagging) of U_r, fed at |U_s|: bisection in mathjs. */
 function loadEnd(us: number, z: math.Complex, current: number, pf: number): number {
-  const i = math.complex({ abs: current, arg: -Math.acos(pf) });
+  const i = math.complex({ r: current, phi: -Math.acos(pf) });
   const d = math.multiply(z, i) as math.Complex;
   const f = (x: number): number => (math.abs(math.add(math.complex(x, 0), d)) as unknown as number) - us;
   let lo = 0;
@@ -134,7 +134,7 @@ describe('PHZ.VOLTDROP', () => {
     const i = ['60∠-20', '42∠-135', '35∠95'].map((t) => ph(t));
     const r = call('VOLTDROP', col('60∠-20', '42∠-135', '35∠95'), '0.524+j0.085', 0.08, '3P4W', 400, null, '0.87+j0.09', null, 15);
     const iN = math.add(math.add(math.complex(i[0].re, i[0].im), math.complex(i[1].re, i[1].im)), math.complex(i[2].re, i[2].im)) as math.Complex;
-    const e = [0, -120, 120].map((a) => math.complex({ abs: 400 / Math.sqrt(3), arg: (a * Math.PI) / 180 }));
+    const e = [0, -120, 120].map((a) => math.complex({ r: 400 / Math.sqrt(3), phi: (a * Math.PI) / 180 }));
     for (let k = 0; k < 3; k++) {
       const line = math.multiply(math.complex(0.524 * 0.08, 0.085 * 0.08), math.complex(i[k].re, i[k].im)) as math.Complex;
       const d = math.add(line, math.multiply(math.complex(0.87 * 0.08, 0.09 * 0.08), iN)) as math.Complex;
