@@ -408,8 +408,15 @@ export class PlanBuilder {
     const top = this.row;
     this.put(top, COL.block, `=${formula}`, 'value');
     rowLabels.forEach((t, r) => this.put(top + r, COL.quantity, t, 'label'));
-    this.put(top, COL.formula, `=FORMULATEXT(${cellA1(top, COL.block)})`, 'formulaText');
     this.row += rowLabels.length;
+    if (columnLabels.length > COL.formula - COL.block) {
+      // a block wider than E:H would spill over the formula column: its formula text goes below it
+      const below = this.row++;
+      this.put(below, COL.quantity, 'Formula of the block above', 'label');
+      this.put(below, COL.block, `=FORMULATEXT(${cellA1(top, COL.block)})`, 'formulaText');
+    } else {
+      this.put(top, COL.formula, `=FORMULATEXT(${cellA1(top, COL.block)})`, 'formulaText');
+    }
     return (r, c) => cellA1(top + r, COL.block + c);
   }
 

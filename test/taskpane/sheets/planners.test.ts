@@ -22,7 +22,7 @@ function namesUsed(formula: string): string[] {
 }
 
 describe('the calculations', () => {
-  it('are the six of the issue, in the chooser’s order, with unique ids', () => {
+  it('are the six of the worked-sheet issue and the panel schedule, in the chooser’s order, with unique ids', () => {
     expect(calculations.map((c) => c.name)).toEqual([
       'Star load with neutral',
       'Star load without neutral',
@@ -30,8 +30,9 @@ describe('the calculations', () => {
       'Delta load',
       'Supply unbalance check',
       'Neutral with harmonics and sizing',
+      'Panel schedule',
     ]);
-    expect(new Set(calculations.map((c) => c.id)).size).toBe(6);
+    expect(new Set(calculations.map((c) => c.id)).size).toBe(7);
     expect(() => calculationById('nope')).toThrow(/star-neutral/);
   });
 
@@ -103,9 +104,9 @@ describe.each(plans)('plan %s', (id, plan) => {
     expect(at.size).toBe(plan.cells.length);
     for (const c of plan.cells) {
       const f = String(c.content);
-      const spill = /^=PHZ\.(STARLOAD|DELTALOAD|SEQCOMP|SIZINGCURRENT|LINESET)\(/.exec(f);
+      const spill = /^=PHZ\.(STARLOAD|DELTALOAD|SEQCOMP|SIZINGCURRENT|LINESET|SCHEDULE|VOLTDROP)\(/.exec(f);
       if (!spill) continue;
-      const [rows, cols] = { STARLOAD: [4, 3], DELTALOAD: [3, 4], SEQCOMP: [3, 1], SIZINGCURRENT: [1, 3], LINESET: [3, 1] }[spill[1]]!;
+      const [rows, cols] = { STARLOAD: [4, 3], DELTALOAD: [3, 4], SEQCOMP: [3, 1], SIZINGCURRENT: [1, 3], LINESET: [3, 1], SCHEDULE: [4, 5], VOLTDROP: [3, 5] }[spill[1]]!;
       for (let r = 0; r < rows; r++) for (let k = 0; k < cols; k++) if (r > 0 || k > 0) expect(at.has(`${c.row + r},${c.col + k}`), `${cellA1(c.row + r, c.col + k)} in the spill of ${f}`).toBe(false);
     }
   });
