@@ -87,7 +87,7 @@ describe('preview workbook in the browser', () => {
     expect(await page.locator('td.k-error').count()).toBe(1);
     expect(((await page.locator('td.k-error').getAttribute('title')) ?? '').length).toBeGreaterThan(10);
     expect(await page.locator('td[data-cell]').count()).toBeGreaterThanOrEqual(26 * 200);
-    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Examples']);
+    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Panel schedule', 'Examples']);
 
     mkdirSync(path.join(repoRoot, 'test-artifacts'), { recursive: true });
     await page.screenshot({ path: path.join(repoRoot, 'test-artifacts/preview.png') });
@@ -229,13 +229,13 @@ describe('preview workbook in the browser', () => {
 
   it('adds a sheet and switches between sheets', async () => {
     await page.getByRole('button', { name: 'Add sheet' }).click();
-    await expect.poll(() => page.locator('.pv-tabs button[role="tab"]').count()).toBe(3);
+    await expect.poll(() => page.locator('.pv-tabs button[role="tab"]').count()).toBe(4);
     const tab = page.locator('.pv-tabs button[role="tab"][aria-selected="true"]');
-    expect(await tab.textContent()).toBe('Sheet3');
+    expect(await tab.textContent()).toBe('Sheet4');
     await typeInto('A1', '42');
     await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Examples' }).click();
     await expect.poll(() => text('A1')).toContain('example');
-    await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Sheet3' }).click();
+    await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Sheet4' }).click();
     await expect.poll(() => text('A1')).toBe('42');
     await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Sub-board' }).click();
   });
