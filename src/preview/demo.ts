@@ -55,7 +55,7 @@ type Line =
     };
 
 export const DEMO_SHEET = 'Sub-board';
-export const PANEL_SHEET = 'Panel schedule';
+export const PANEL_SHEET = 'Schedule DB-OW1';
 export const EXAMPLES_SHEET = 'Examples';
 
 const PHASE_COLUMNS = ['B', 'C', 'D'] as const;

@@ -87,7 +87,7 @@ describe('preview workbook in the browser', () => {
     expect(await page.locator('td.k-error').count()).toBe(1);
     expect(((await page.locator('td.k-error').getAttribute('title')) ?? '').length).toBeGreaterThan(10);
     expect(await page.locator('td[data-cell]').count()).toBeGreaterThanOrEqual(26 * 200);
-    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Panel schedule', 'Examples']);
+    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Schedule DB-OW1', 'Examples']);
 
     mkdirSync(path.join(repoRoot, 'test-artifacts'), { recursive: true });
     await page.screenshot({ path: path.join(repoRoot, 'test-artifacts/preview.png') });
