@@ -3,6 +3,7 @@ import { closeLineSet, deltaExtras, solveDelta, starOfClosedLineSet } from '../.
 import { defineFunction, type HostResult } from '../spec';
 import { readBoolean, readDigits } from '../readers';
 import { DIGITS, phasorParam } from '../params';
+import { SIZING_CAUTIONS } from '../neutral/_cautions';
 import { readImpedanceSet, readLineImpedances, readTriple } from '../sets/_threephase';
 
 const HEADER = ['', 'loss (VA)', 'source power (VA)', 'drop at branch (%)'];
@@ -31,6 +32,10 @@ export const DELTALOSSES = defineFunction({
   ],
   result: 'A 4×3 table (5×4 with labels): rows 1–3 [line loss, source power (polar text), drop at the branch %]; row 4 [0, total source power, largest drop %].',
   errors: ['As PHZ.DELTALOAD; and a 0 V line voltage (the drop in percent needs it) gives #VALUE!.'],
+  cautions: [
+    ...SIZING_CAUTIONS,
+    'The permitted voltage drop and the conductors’ operating temperature (on which their resistance depends) are set by the locally adopted wiring rules.',
+  ],
   examples: [
     {
       formula: '=PHZ.DELTALOSSES({"400∠30";"400∠-90";"400∠150"}, {"40";"80";"40"}, "0.4", FALSE(), 4)',

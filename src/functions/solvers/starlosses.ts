@@ -4,6 +4,7 @@ import { ZERO } from '../../core/phasor';
 import { defineFunction, type HostResult } from '../spec';
 import { readBoolean, readDigits } from '../readers';
 import { DIGITS, phasorParam } from '../params';
+import { SIZING_CAUTIONS } from '../neutral/_cautions';
 import { readImpedanceSet, readLineImpedances, readNeutral, readTriple } from '../sets/_threephase';
 
 const HEADER = ['', 'loss (VA)', 'source power (VA)', 'drop at load (%)'];
@@ -32,6 +33,10 @@ export const STARLOSSES = defineFunction({
   ],
   result: 'A 4×3 table (5×4 with labels): rows lines 1–3 [line loss, source power (polar text), drop at the load %]; row 4 [neutral loss, total source power, largest drop %].',
   errors: ['As PHZ.STARLOAD; and a 0 V source phase (the drop in percent needs its voltage) gives #VALUE!.'],
+  cautions: [
+    ...SIZING_CAUTIONS,
+    'The permitted voltage drop and the conductors’ operating temperature (on which their resistance depends) are set by the locally adopted wiring rules.',
+  ],
   examples: [
     {
       formula: '=PHZ.STARLOSSES({"230∠0";"230∠-120";"230∠120"}, {"11.5";"23";"23"}, "0.5", "0.5", FALSE(), 4)',
