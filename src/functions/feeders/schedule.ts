@@ -28,7 +28,7 @@ export const SCHEDULE = defineFunction({
     'of the fundamental, lagging unless the word lead follows it (0.9 lead; lag, ind and cap are read too); a negative power factor is ' +
     'refused, never read as leading, since sign conventions differ. A load in W is P (S = P/pf), in VA |S| (P = S·pf). The demand factor ' +
     '(0 to 1, or 80 %) scales the load; the non-linear share (0 to 1, or 40 %) is the part of the load whose harmonic currents the ' +
-    'harmonics table gives, rows [order, percent] or [order, p1, p2, p3] in percent of that part’s fundamental current, as NEUTRALRMS takes them. ' +
+    'harmonics table gives, rows [order, percent] or [order, p1, p2, p3] (p1 for the circuits on line 1, and so on) in percent of that part’s fundamental current, as NEUTRALRMS takes them. ' +
     'A row whose load is blank or 0 is a spare way and is skipped. Every load is taken at the supply voltage (no drop); S = V·I*. ' +
     'Line to neutral on phase k: I = (S/E_k)*. Line to line p-q: I = (S/V_pq)* with V_pq = E_p − E_q, out of line p and into line q ' +
     '(the exact phasor, not half the power on each phase). Three-phase: a balanced set, I1 = (S/(3·V₁))*, I2 = a²·I1, I3 = a·I1, with V₁ ' +

@@ -167,6 +167,12 @@ describe('PHZ.SCHEDULE', () => {
     expect(t[3][1] as number).toBeGreaterThan(rms);
   });
 
+  it('harmonics per line: [order, p1, p2, p3] gives each line’s circuits their own content (by hand: 9 + 6 + 3 A of third harmonic in phase add to 18 A)', () => {
+    const t = call('SCHEDULE', 230, col('A', 'B', 'C'), col('2.3 kW', '2.3 kW', '2.3 kW'), 1, 1, null, [[3, 90, 60, 30]]);
+    expect(t[3][0]).toBe('0');
+    expectClose(t[3][1] as number, 18, 1e-13);
+  });
+
   it('harmonics and non-linear shares go together: either alone is refused, saying why', () => {
     expectMessage(() => call('SCHEDULE', 230, col('L1'), col(100), 1, null, null, [[3, 50]]), /harmonics were given but nonlinear was left out/);
     expectMessage(() => call('SCHEDULE', 230, col('L1', 'L2'), col(100, 100), 1, col(0, '30 %')), /nonlinear, row 2 marks a non-linear share, but no harmonics table was given/);
