@@ -10,6 +10,7 @@ import { calculationById, calculations } from '../../../src/taskpane/sheets/calc
 import { demoValues, readField, readFields } from '../../../src/taskpane/sheets/calculation';
 import { COL, F, cellA1, looksLikeAddress, nameOf, planGrid, uniqueSheetName, type SheetPlan } from '../../../src/taskpane/sheets/plan';
 import { magnitudesOnly } from '../../../src/taskpane/sheets/unbalance';
+import { parseA1 } from '../../../src/taskpane/plot/address';
 
 const META = { scenario: 'Planner test scenario', date: '2026-12-02' };
 const plans: Array<[string, SheetPlan]> = calculations.map((c) => [c.id, c.plan(demoValues(c), META)]);
@@ -180,9 +181,15 @@ describe.each(plans)('plan %s', (id, plan) => {
     for (const p of plan.chart.phasors) expect(named.has(p.cell), p.label).toBe(true);
     expect(new Set(plan.chart.phasors.map((p) => p.group))).toContain('V');
     const place = plan.cells.filter((c) => c.row >= plan.chartArea.top && c.row <= plan.chartArea.bottom && c.col >= plan.chartArea.left);
-    expect(place.some((c) => /Reserved for the phasor chart/.test(String(c.content)))).toBe(true);
+    expect(place.some((c) => /The phasor chart of the values named below goes here/.test(String(c.content)))).toBe(true);
     // nothing else is written inside the chart area
     expect(place.every((c) => c.role === 'chart' || c.role === 'heading')).toBe(true);
+    // the chart goes into that place; its helper cells go below everything the plan writes
+    const chartAt = parseA1(plan.chart.chartCell!)!;
+    expect(chartAt.row).toBeGreaterThan(plan.chartArea.top);
+    expect(chartAt.row).toBeLessThanOrEqual(plan.chartArea.bottom);
+    expect(chartAt.col).toBe(plan.chartArea.left);
+    expect(parseA1(plan.chart.anchor!)!.row).toBeGreaterThanOrEqual(plan.extent.rows);
   });
 
   it('lays out as a rectangle the writers can write in one block', () => {
