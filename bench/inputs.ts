@@ -3,18 +3,7 @@
  * engineer types them (two or three decimals, angles that are not multiples of 15°), from
  * a seeded generator so every run times the same values. Not used by any test.
  */
-
-/** mulberry32: a small seeded generator (public domain), so runs are repeatable. */
-function generator(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { seeded } from './seeded';
 
 /** A decimal in [lo, hi) with `decimals` places, as text. */
 function decimal(next: () => number, lo: number, hi: number, decimals: number): string {
@@ -44,7 +33,7 @@ export interface DivCase {
 
 /** `n` distinct cases: voltages 180–420 V at varied angles, impedances 0.5–60 Ω, −30…+40 Ω. */
 export function divCases(n: number, seed = 20240611): DivCase[] {
-  const next = generator(seed);
+  const next = seeded(seed);
   const out: DivCase[] = [];
   const seen = new Set<string>();
   while (out.length < n) {
@@ -62,6 +51,43 @@ export function divCases(n: number, seed = 20240611): DivCase[] {
     const divisorJ = `${zr}${zx.startsWith('-') ? '-j' + zx.slice(1) : '+j' + zx}`;
     const divisorI = `${zr}${zx.startsWith('-') ? zx : '+' + zx}i`;
     out.push({ polar: `${mag}∠${ang}`, rectJ, rectI, divisorJ, divisorI });
+  }
+  return out;
+}
+
+export interface NetworkCase {
+  /** Source phase voltages (star) or line voltages (delta) as polar text, one per row. */
+  readonly supply: string[][];
+  /** Three load impedances as rectangular text, one per row. */
+  readonly loads: string[][];
+  /** One line impedance for every line. */
+  readonly line: string[][];
+}
+
+/**
+ * `n` three-phase networks as an engineer types them: a supply of 220–240 V phases a degree
+ * or two off the ideal angles (their line voltages for a delta), three unequal loads of
+ * 2–60 Ω at varied power factors, and a line impedance of 0.05–0.5 Ω.
+ */
+export function networkCases(n: number, kind: 'star' | 'delta', seed = 20261202): NetworkCase[] {
+  const next = seeded(seed);
+  const out: NetworkCase[] = [];
+  for (let k = 0; k < n; k++) {
+    // phase voltages a volt or a degree or two off the ideal set; a delta is fed their line
+    // voltages (V1 − V2, V2 − V3, V3 − V1), which close as measured ones do
+    const phases = [0, -120, 120].map((a) => {
+      const m = Number(decimal(next, 220, 240, 1));
+      const r = ((a + (next() - 0.5) * 3) * Math.PI) / 180;
+      return [m * Math.cos(r), m * Math.sin(r)];
+    });
+    const parts = kind === 'star' ? phases : [0, 1, 2].map((i) => [phases[i][0] - phases[(i + 1) % 3][0], phases[i][1] - phases[(i + 1) % 3][1]]);
+    const supply = parts.map(([re, im]) => [`${Math.hypot(re, im).toFixed(2)}∠${((Math.atan2(im, re) * 180) / Math.PI).toFixed(2)}`]);
+    const loads = [0, 1, 2].map(() => {
+      const r = decimal(next, 2, 60, 2);
+      const x = decimal(next, -15, 30, 2);
+      return [`${r}${x.startsWith('-') ? '-j' + x.slice(1) : '+j' + x}`];
+    });
+    out.push({ supply, loads, line: [[`${decimal(next, 0.05, 0.5, 3)}+j${decimal(next, 0.02, 0.2, 3)}`]] });
   }
   return out;
 }

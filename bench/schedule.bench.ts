@@ -7,17 +7,7 @@
  * `npm run bench` (bench/run.ts); figures are printed, never asserted.
  */
 import { functions } from '../src/functions';
-
-function generator(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+import { bestNsPerCall, seeded } from './seeded';
 
 const CONNECTIONS = ['L1', 'L2', 'L3', 'A', 'B', 'C', '1', '2', '3', 'L1-L2', 'L2-L3', 'L3-L1', 'AB', 'BC', 'CA', '3P', 'ABC', '123'];
 
@@ -31,7 +21,7 @@ interface Schedule {
 
 /** A schedule of `n` ways as a sheet holds it. */
 export function scheduleCells(n: number, seed: number): Schedule {
-  const next = generator(seed);
+  const next = seeded(seed);
   const s: Schedule = { connections: [], loads: [], pfs: [], nonlinear: [], demand: [] };
   for (let i = 0; i < n; i++) {
     s.connections.push([CONNECTIONS[Math.floor(next() * CONNECTIONS.length)]]);
@@ -56,25 +46,12 @@ const HARMONICS = [
   [9, 14],
   [11, 8],
 ];
-let sink = 0;
-
 /** Best µs per call over several timed batches after a warm-up. */
 export function benchSchedule(n = 500): number {
   const cases = Array.from({ length: 16 }, (_, k) => scheduleCells(n, 100 + k));
-  let k = 0;
-  const call = (): unknown[][] => {
-    const s = cases[(k = (k + 1) & 15)];
+  const call = (i: number): unknown[][] => {
+    const s = cases[i & 15];
     return functions.SCHEDULE(SUPPLY, s.connections, s.loads, s.pfs, s.nonlinear, s.demand, HARMONICS, null, null);
   };
-  const batch = 200;
-  for (let i = 0; i < batch; i++) sink += call().length;
-  let best = Infinity;
-  for (let r = 0; r < 9; r++) {
-    const t0 = process.hrtime.bigint();
-    for (let i = 0; i < batch; i++) sink += call().length;
-    const us = Number(process.hrtime.bigint() - t0) / 1000 / batch;
-    if (us < best) best = us;
-  }
-  if (sink === -1) console.log(sink);
-  return best;
+  return bestNsPerCall(call, 200, 9) / 1000;
 }

@@ -141,17 +141,8 @@ export function nodalSchedule(supply: C[], circuits: readonly RefCircuit[]): { l
   return { lines: [injection(0), injection(1), injection(2)], neutral: math.unaryMinus(injection(3)) as MComplex };
 }
 
-/** mulberry32: a small seeded generator, so a failing schedule can be replayed from its seed. */
-export function seeded(seed: number): () => number {
-  let a = seed >>> 0;
-  return () => {
-    a = (a + 0x6d2b79f5) >>> 0;
-    let t = a;
-    t = Math.imul(t ^ (t >>> 15), t | 1);
-    t ^= t + Math.imul(t ^ (t >>> 7), t | 61);
-    return ((t ^ (t >>> 14)) >>> 0) / 4294967296;
-  };
-}
+// mulberry32 (bench/seeded.ts): a failing schedule can be replayed from its seed.
+export { seeded } from '../../../bench/seeded';
 
 const LN_SPELLINGS = [
   ['1', 'L1', 'A', 'l1', 'a', 'L1-N', 'AN', ' L 1 '],
