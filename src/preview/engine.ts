@@ -5,8 +5,10 @@
  */
 import { DetailedCellError, HyperFormula } from 'hyperformula';
 import type { CellValue, RawCellContent, SimpleCellAddress } from 'hyperformula';
+import { clipMiddle, workbookMessages as M } from '../core/messages';
 import { functions as registryFunctions, specs as registrySpecs } from '../functions';
 import { registerRegistry, spillingFormulas, takePendingResizes } from './adapter';
+import { checkFormula, hasDoubledQuote } from './formula-guard';
 import type { Registry } from './adapter';
 
 export { NAMESPACE, functionId, createPhzPlugin } from './adapter';
@@ -31,10 +33,55 @@ export function isDisplayError(v: unknown): v is DisplayError {
   return typeof v === 'object' && v !== null && 'error' in v && 'message' in v;
 }
 
-/** Engine value → display value. */
+/** Sheet size: Excel's (1,048,576 rows × 16,384 columns, A to XFD), so any .xlsx fits. */
+export const MAX_ROWS = 1_048_576;
+export const MAX_COLUMNS = 16_384;
+
+/** Longest message a cell shows (tooltip, status line); longer ones are cut in the middle. */
+export const MESSAGE_LIMIT = 300;
+
+/**
+ * Engine value → display value. Numbers keep 15 significant figures, as Excel keeps them
+ * (rounded here rather than by the engine, whose rounding turns numbers below about 1e-294
+ * into NaN); a value that is not finite becomes an error.
+ */
 export function toDisplay(v: CellValue): DisplayValue {
-  if (v instanceof DetailedCellError) return { error: v.value, message: v.message ?? '' };
+  if (v instanceof DetailedCellError) return { error: v.value, message: clipMiddle(v.message ?? '', MESSAGE_LIMIT) };
+  if (typeof v === 'number') {
+    if (!Number.isFinite(v)) return { error: '#NUM!', message: M.notFiniteValue };
+    return v === 0 ? 0 : Number(v.toPrecision(15));
+  }
   return v as DisplayValue;
+}
+
+/** Formula texts the engine failed on after they passed the checks (bounded). */
+const failedFormulas = new Set<string>();
+
+/** Why a formula text is kept as text instead of being given to the engine, or undefined. */
+function refusal(text: string): string | undefined {
+  if (failedFormulas.has(text)) return M.formulaTooComplex;
+  const check = checkFormula(text);
+  return check.refused;
+}
+
+/**
+ * What the engine is given for what a person typed: a formula over the limits is kept as
+ * text (with the engine's leading apostrophe), so the cell keeps it and shows why; `1E-3`
+ * is written `1e-3`.
+ */
+export function prepareContent(raw: RawCellContent): RawCellContent {
+  if (typeof raw !== 'string' || raw.charCodeAt(0) !== 61 /* = */ || raw.length < 2) return raw;
+  if (failedFormulas.has(raw)) return `'${raw}`;
+  const check = checkFormula(raw);
+  return check.refused !== undefined ? `'${raw}` : check.formula;
+}
+
+function prepareRows(rows: RawCellContent[][]): RawCellContent[][] {
+  return rows.map((row) => row.map(prepareContent));
+}
+
+function isStackOverflow(e: unknown): boolean {
+  return e instanceof RangeError && /call stack/i.test(e.message);
 }
 
 /**
@@ -63,8 +110,16 @@ export class PhzEngine {
     registerRegistry(options.registry ?? defaultRegistry);
     // Excel keeps 15 significant figures of a number; the engine's default hands out 11
     // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures.
-    const config = { licenseKey: LICENSE_KEY, undoLimit: 0, useArrayArithmetic: true, precisionRounding: 14 };
-    const sheets = options.sheets ?? {};
+    // Rounding to 15 figures happens in `toDisplay` (smartRounding off; see there).
+    const config = {
+      licenseKey: LICENSE_KEY,
+      undoLimit: 0,
+      useArrayArithmetic: true,
+      smartRounding: false,
+      maxRows: MAX_ROWS,
+      maxColumns: MAX_COLUMNS,
+    };
+    const sheets = Object.fromEntries(Object.entries(options.sheets ?? {}).map(([name, rows]) => [name, prepareRows(rows)]));
     this.hf =
       Object.keys(sheets).length > 0
         ? HyperFormula.buildFromSheets(sheets, config, LOGICAL_NAMES)
@@ -120,14 +175,57 @@ export class PhzEngine {
     return result;
   }
 
-  /** Sets a block of raw contents with its top-left at `at`. */
+  /**
+   * Sets a block of raw contents with its top-left at `at` (formulas checked first, see
+   * `prepareContent`). Should the engine still fail on a formula (its call stack), the
+   * block is written again with the formulas that fail kept as text, so nothing typed is
+   * lost and the page goes on.
+   */
   setContents(at: SimpleCellAddress, contents: RawCellContent[][]): void {
-    this.change((hf) => hf.setCellContents(at, contents));
+    const prepared = prepareRows(contents);
+    try {
+      this.change((hf) => hf.setCellContents(at, prepared));
+    } catch (e) {
+      if (!isStackOverflow(e)) throw e;
+      this.writeAvoidingFailures(at, prepared);
+    }
+  }
+
+  private writeAvoidingFailures(at: SimpleCellAddress, rows: RawCellContent[][]): void {
+    const safe = rows.map((row) => row.map((v) => (typeof v === 'string' && v.startsWith('=') ? null : v)));
+    this.change((hf) => hf.setCellContents(at, safe));
+    rows.forEach((row, r) =>
+      row.forEach((v, c) => {
+        if (typeof v !== 'string' || !v.startsWith('=')) return;
+        const cell = { sheet: at.sheet, row: at.row + r, col: at.col + c };
+        try {
+          this.change((hf) => hf.setCellContents(cell, [[v]]));
+        } catch (e) {
+          if (!isStackOverflow(e)) throw e;
+          if (failedFormulas.size > 1000) failedFormulas.clear();
+          failedFormulas.add(v);
+          this.change((hf) => hf.setCellContents(cell, [[`'${v}`]]));
+        }
+      }),
+    );
   }
 
   /** What the cell shows. */
   display(at: SimpleCellAddress): DisplayValue {
-    return toDisplay(this.hf.getCellValue(at));
+    const v = this.hf.getCellValue(at);
+    if (typeof v === 'string') {
+      if (v.charCodeAt(0) === 61 /* = */) {
+        const why = refusal(v);
+        if (why !== undefined && this.hf.getCellFormula(at) === undefined) return { error: '#ERROR!', message: why };
+      }
+      return v;
+    }
+    if (v instanceof DetailedCellError && v.value === '#ERROR!') {
+      const formula = this.hf.getCellFormula(at);
+      if (formula !== undefined && hasDoubledQuote(formula)) return { error: v.value, message: M.doubledQuote };
+      if (formula !== undefined && /^Parsing error/i.test(v.message ?? '')) return { error: v.value, message: M.unreadable(v.message ?? '') };
+    }
+    return toDisplay(v);
   }
 
   /**
@@ -139,6 +237,8 @@ export class PhzEngine {
     if (formula !== undefined) return formula;
     if (this.hf.isCellPartOfArray(at)) return null;
     const raw = this.hf.getCellSerialized(at);
+    // a formula kept as text (see `prepareContent`) is given back as typed
+    if (typeof raw === 'string' && raw.startsWith("'=") && refusal(raw.slice(1)) !== undefined) return raw.slice(1);
     return raw === undefined ? null : raw;
   }
 
