@@ -93,6 +93,13 @@ const LOGICAL_NAMES = [
   { name: 'FALSE', expression: '=FALSE()' },
 ];
 
+/** A name as the engine holds it: `expression` is a formula (`='Sheet 1'!$B$5`); `scope` a sheet, or none for the workbook. */
+export interface SerializedName {
+  readonly name: string;
+  readonly expression: string;
+  readonly scope?: string;
+}
+
 export interface EngineOptions {
   readonly registry?: Registry;
   /** Initial sheets by name, rows of raw contents (numbers, text, `=formulas`). */
@@ -104,7 +111,9 @@ export interface EngineOptions {
  * spill areas whose size followed a change of inputs.
  */
 export class PhzEngine {
-  readonly hf: HyperFormula;
+  /** The engine itself; `rebuild` puts a new one in its place. */
+  hf: HyperFormula;
+  private readonly config: Record<string, unknown>;
 
   constructor(options: EngineOptions = {}) {
     registerRegistry(options.registry ?? defaultRegistry);
@@ -119,12 +128,65 @@ export class PhzEngine {
       maxRows: MAX_ROWS,
       maxColumns: MAX_COLUMNS,
     };
+    this.config = config;
     const sheets = Object.fromEntries(Object.entries(options.sheets ?? {}).map(([name, rows]) => [name, prepareRows(rows)]));
     this.hf =
       Object.keys(sheets).length > 0
         ? HyperFormula.buildFromSheets(sheets, config, LOGICAL_NAMES)
         : HyperFormula.buildEmpty(config, LOGICAL_NAMES);
     this.settle();
+  }
+
+  /**
+   * Replaces everything the engine holds by `sheets` (in this order) and `names`, built in
+   * one go (much faster than writing the cells into the sheets one block at a time).
+   */
+  rebuild(sheets: ReadonlyArray<{ readonly name: string; readonly rows: RawCellContent[][] }>, names: readonly SerializedName[]): void {
+    const order = sheets.map((s) => s.name);
+    const named = [
+      ...LOGICAL_NAMES,
+      ...names.map((n) => ({ name: n.name, expression: n.expression, ...(n.scope === undefined ? {} : { scope: order.indexOf(n.scope) }) })),
+    ];
+    const data: Record<string, RawCellContent[][]> = {};
+    for (const s of sheets) data[s.name] = prepareRows(s.rows.length > 0 ? s.rows : [[]]);
+    let next: HyperFormula | undefined;
+    try {
+      next = HyperFormula.buildFromSheets(data, this.config, named);
+      // object keys that look like numbers come first in JS: then the order is built again
+      if (next.getSheetNames().join('\u0000') !== order.join('\u0000')) {
+        next.destroy();
+        next = undefined;
+      }
+    } catch (e) {
+      next?.destroy();
+      next = undefined;
+      if (!isStackOverflow(e)) throw e;
+    }
+    if (!next) {
+      next = HyperFormula.buildEmpty(this.config, LOGICAL_NAMES);
+      for (const name of order) next.addSheet(name);
+      const old = this.hf;
+      this.hf = next;
+      old.destroy();
+      for (const n of names) this.hf.addNamedExpression(n.name, n.expression, n.scope === undefined ? undefined : this.hf.getSheetId(n.scope));
+      for (const s of sheets) if (s.rows.length > 0) this.setContents({ sheet: this.hf.getSheetId(s.name) ?? 0, row: 0, col: 0 }, s.rows);
+      return;
+    }
+    const old = this.hf;
+    this.hf = next;
+    old.destroy();
+    this.settle();
+  }
+
+  /** Names the engine holds (the workbook's own TRUE and FALSE left out). */
+  names(): SerializedName[] {
+    const out: SerializedName[] = [];
+    for (const n of this.hf.getAllNamedExpressionsSerialized()) {
+      if (n.scope === undefined && LOGICAL_NAMES.some((l) => l.name === n.name)) continue;
+      const scope = n.scope === undefined ? undefined : this.hf.getSheetName(n.scope);
+      out.push({ name: n.name, expression: String(n.expression), ...(scope === undefined ? {} : { scope }) });
+    }
+    return out;
   }
 
   /**

@@ -17,7 +17,7 @@ export const MAX_NESTING = 64;
 /** Most operators (+ − * / ^ & = < >) in one formula, outside text. */
 export const MAX_OPERATORS = 256;
 
-export type FormulaCheck = { readonly formula: string; readonly refused?: undefined } | { readonly refused: string };
+export type FormulaCheck = { readonly formula: string; readonly refused?: undefined } | { readonly formula?: undefined; readonly refused: string };
 
 /** Characters that continue a name or a number (so `A1E3` or `X1E5` is not an exponent). */
 const NAME_CHAR = /[A-Za-z0-9_.$]/;
