@@ -101,7 +101,7 @@ describe('.xlsx round trip', async () => {
     let inputs = 0;
     ws.eachRow((row, r) =>
       row.eachCell((cell, c) => {
-        const v = cell.value as ExcelJS.CellFormulaValue;
+        const v = cell.value as ExcelJS.CellFormulaValue & { shareType?: string };
         if (v && typeof v === 'object' && 'formula' in v && v.formula) {
           formulas++;
           expect(`=${v.formula}`).toBe(before.raw('Sub-board', r - 1, c - 1));
