@@ -9,6 +9,7 @@ import { clipMiddle, workbookMessages as M } from '../core/messages';
 import { functions as registryFunctions, specs as registrySpecs } from '../functions';
 import { registerRegistry, spillingFormulas, takePendingResizes } from './adapter';
 import { checkFormula, hasDoubledQuote } from './formula-guard';
+import { indexDependencyGraph } from './graph-index';
 import type { Registry } from './adapter';
 
 export { NAMESPACE, functionId, createPhzPlugin } from './adapter';
@@ -53,6 +54,8 @@ export function toDisplay(v: CellValue): DisplayValue {
   }
   return v as DisplayValue;
 }
+
+let graphPatched = false;
 
 /** Formula texts the engine failed on after they passed the checks (bounded). */
 const failedFormulas = new Set<string>();
@@ -129,11 +132,19 @@ export class PhzEngine {
       maxColumns: MAX_COLUMNS,
     };
     this.config = config;
+    if (!graphPatched) {
+      // the patch goes on the graph's class, so engines built from sheets get it from the start
+      const probe = HyperFormula.buildEmpty({ licenseKey: LICENSE_KEY });
+      indexDependencyGraph(probe);
+      probe.destroy();
+      graphPatched = true;
+    }
     const sheets = Object.fromEntries(Object.entries(options.sheets ?? {}).map(([name, rows]) => [name, prepareRows(rows)]));
     this.hf =
       Object.keys(sheets).length > 0
         ? HyperFormula.buildFromSheets(sheets, config, LOGICAL_NAMES)
         : HyperFormula.buildEmpty(config, LOGICAL_NAMES);
+    indexDependencyGraph(this.hf);
     this.settle();
   }
 

@@ -895,7 +895,8 @@ export class Grid {
           // scrolled near the end: the area grows, up to the end of the sheet
           const v = this.visible();
           if (v.bottom >= this.extentRows - 2 && this.extentRows < MAX_ROWS) {
-            this.grownRows = Math.max(this.grownRows, this.extentRows + ROW_ROOM);
+            // a tenth more each time (at least 1,000 rows), so far rows come within a few scrolls
+            this.grownRows = Math.max(this.grownRows, this.extentRows + Math.max(5 * ROW_ROOM, Math.round(this.extentRows / 10)));
             this.layout();
           }
           if (v.right >= this.extentCols - 1 && this.extentCols < MAX_COLUMNS) {

@@ -48,6 +48,8 @@ const JOURNAL_KEY = 'starpoint-preview-journal';
 export const JOURNAL_BLOCK_CELLS = 5_000;
 /** Characters the journal may hold in all (localStorage keeps about 5 million per site). */
 export const JOURNAL_CHARS = 1_000_000;
+/** Wait before writing the workbook after a change too large for the journal (ms). */
+const BIG_CHANGE_DELAY_MS = 150;
 
 export function indexedDbStore(): DocumentStore {
   let store: UseStore | undefined;
@@ -75,6 +77,7 @@ export interface KeeperOptions {
 export class Keeper {
   private seq = 0;
   private timer: ReturnType<typeof setTimeout> | undefined;
+  private urgent = false;
   private writing: Promise<void> = Promise.resolve();
   private journalChars = 0;
   private readonly delayMs: number;
@@ -89,15 +92,16 @@ export class Keeper {
 
   /**
    * Loads the kept workbook (when there is one) and replays the journal over it (or over
-   * what the workbook holds now, the demo, when only a journal was kept). Returns what was
+   * the workbook `loadBase` loads, the demo, when only a journal was kept). Returns what was
    * found. Throws when a copy is kept but cannot be read; the caller says so and leaves it.
    */
-  async restore(): Promise<{ copy: KeptCopy | undefined; replayed: number } | undefined> {
+  async restore(loadBase: () => void): Promise<{ copy: KeptCopy | undefined; replayed: number } | undefined> {
     const copy = await this.options.store.load();
     const entries = this.readJournal();
     if (copy === undefined && entries.length === 0) return undefined;
     if (copy !== undefined && !isDocument(copy.doc)) throw new Error('the kept copy is not a workbook of this preview');
     if (copy !== undefined) this.workbook.load(copy.doc);
+    else loadBase();
     const after = copy?.seq ?? 0;
     let replayed = 0;
     for (const e of entries) {
@@ -120,6 +124,7 @@ export class Keeper {
   flush(): Promise<void> {
     if (this.timer !== undefined) clearTimeout(this.timer);
     this.timer = undefined;
+    this.urgent = false;
     const seq = this.seq;
     let doc: WorkbookDocument;
     try {
@@ -138,8 +143,16 @@ export class Keeper {
     return this.writing;
   }
 
-  private schedule(ms: number): void {
-    if (this.timer !== undefined) clearTimeout(this.timer);
+  /**
+   * Writes the copy after `ms`. Quiet-time writes move with each change (debounce); a write
+   * asked for soon (`urgent`: a change too large for the journal) is not put off by them.
+   */
+  private schedule(ms: number, urgent = false): void {
+    if (this.timer !== undefined) {
+      if (this.urgent && !urgent) return;
+      clearTimeout(this.timer);
+    }
+    this.urgent = urgent;
     this.timer = setTimeout(() => void this.flush(), ms);
   }
 
@@ -154,13 +167,14 @@ export class Keeper {
     const journal = this.options.journal;
     const cells = rows.length * (rows[0]?.length ?? 0);
     if (!journal || cells > JOURNAL_BLOCK_CELLS) {
-      this.schedule(0);
+      // soon, but after the grid has shown the change (the page-hide handler writes it sooner)
+      this.schedule(BIG_CHANGE_DELAY_MS, true);
       return;
     }
     const entry: JournalEntry = { seq: this.seq, sheet, top, left, rows };
     const line = JSON.stringify(entry);
     if (this.journalChars + line.length > JOURNAL_CHARS) {
-      this.schedule(0);
+      this.schedule(0, true);
       return;
     }
     try {
@@ -170,7 +184,7 @@ export class Keeper {
       this.journalChars = next.length;
     } catch {
       // full or refused: the whole workbook goes to IndexedDB at once instead
-      this.schedule(0);
+      this.schedule(0, true);
     }
   }
 

@@ -61,9 +61,10 @@ async function start(): Promise<void> {
   const paneRoot = document.getElementById('pv-pane');
   if (!bookRoot || !paneRoot) throw new Error('preview.html lacks #pv-book or #pv-pane');
 
-  const demo = demoDocument();
+  // the demo is built only when it is needed (no kept workbook, New, a kept one unreadable)
+  let demo: { doc: WorkbookDocument; skipped: number } | undefined;
+  const theDemo = () => (demo ??= demoDocument());
   const workbook = new Workbook(new PhzEngine());
-  workbook.load(demo.doc);
   const keeper = new Keeper(workbook, {
     store: indexedDbStore(),
     journal: localStorageOrUndefined(),
@@ -72,11 +73,12 @@ async function start(): Promise<void> {
   let restored: string | undefined;
   let problem: string | undefined;
   try {
-    const found = await keeper.restore();
+    const found = await keeper.restore(() => workbook.load(theDemo().doc));
     if (found?.copy) restored = M.restored(new Date(found.copy.savedAt).toLocaleString());
     else if (found && found.replayed > 0) restored = M.restored('just now');
+    else workbook.load(theDemo().doc);
   } catch (e) {
-    workbook.load(demo.doc);
+    workbook.load(theDemo().doc);
     problem = M.restoreFailed(e instanceof Error ? e.message : String(e));
   }
 
@@ -87,7 +89,7 @@ async function start(): Promise<void> {
     grid.showSheet(DEMO_SHEET);
     grid.select({ row: 5, col: 1 });
   }
-  addWorkbookActions(grid, workbook, keeper, demo.doc);
+  addWorkbookActions(grid, workbook, keeper, () => theDemo().doc);
   keeper.start();
   // a hidden page may never come back (tab closed, browser quit): write the copy now
   document.addEventListener('visibilitychange', () => {
@@ -100,13 +102,13 @@ async function start(): Promise<void> {
   else {
     grid.say(
       `Demo workbook loaded: ${specs.length} PHZ functions. Your edits are kept in this browser.` +
-        (demo.skipped > 0 ? ` ${demo.skipped} demo line${demo.skipped === 1 ? '' : 's'} wait for functions not in the registry yet.` : ''),
+        (theDemo().skipped > 0 ? ` ${theDemo().skipped} demo line${theDemo().skipped === 1 ? '' : 's'} wait for functions not in the registry yet.` : ''),
     );
   }
 }
 
 /** New workbook, Open (.xlsx) and Save as .xlsx, in the formula bar row. */
-function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo: WorkbookDocument): void {
+function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo: () => WorkbookDocument): void {
   const doc = grid.element.ownerDocument;
   const newButton = button(doc, 'New', 'New workbook: the demo workbook again (asks first; Ctrl+Z brings this one back)');
   const openButton = button(doc, 'Open…', 'Open an .xlsx file (replaces this workbook; Ctrl+Z brings it back)');
@@ -125,7 +127,7 @@ function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo
 
   newButton.addEventListener('click', () => {
     if (!window.confirm(M.confirmNew)) return;
-    workbook.replaceWith(demo, 'New workbook');
+    workbook.replaceWith(demo(), 'New workbook');
     grid.showSheet(DEMO_SHEET);
     void keeper.flush();
     grid.say('New workbook: the demo workbook. Ctrl+Z brings back the one before.');

@@ -182,3 +182,10 @@ describe('error messages quote an excerpt of what was given', () => {
     expect(clipMiddle('short', 50)).toBe('short');
   });
 });
+
+describe('phasor literals in a formula (README "Writing phasors")', () => {
+  it('are text in quotes: unquoted, j4 is read as a reference to the empty cell J4', () => {
+    expect(oneCell('=PHZ.MAG("3+j4")').shown).toBe(5);
+    expect(oneCell('=PHZ.MAG(3+j4)').shown).toBe(3);
+  });
+});
