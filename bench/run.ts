@@ -3,9 +3,10 @@
  * DIV on two text phasors ≤ 0.5× complex.js's own parse + divide + toString;
  * ADD over a 100,000-cell column of text phasors ≤ 30 ms; STARLOAD ≤ 5 µs per call.
  * Worked sheets (issue 9): the largest sheet planned ≤ 1 ms and written into the preview
- * ≤ 250 ms (our own targets: the pane should answer at once). The preview workbook
- * (issue 12, bench/workbook.bench.ts): paste, recalculation, undo and reload of 40,000
- * rows of PHZ.DIV, each ≤ 1 s.
+ * ≤ 250 ms (our own targets: the pane should answer at once). Panel schedules (issue 11):
+ * PHZ.SCHEDULE on 500 ways ≤ 1 ms per call (our own target: a schedule recalculates at once).
+ * The preview workbook (issue 12, bench/workbook.bench.ts): paste, recalculation, undo and
+ * reload of 40,000 rows of PHZ.DIV, each ≤ 1 s.
  *
  * The DIV figures come twice: on one constant input (whose angle hits the exact 15°
  * tables) and over 256 distinct realistic inputs (bench/inputs.ts: decimals, angles that
@@ -24,6 +25,7 @@ import { benchStarload } from './starload.bench';
 import { benchDeltaload } from './deltaload.bench';
 import { benchPlot1000, benchReplot50 } from './plot.bench';
 import { benchPlan, benchWrite, largest } from './sheets.bench';
+import { benchSchedule } from './schedule.bench';
 import { divCases } from './inputs';
 import { PASTE_ROWS, workbookCases } from './workbook.bench';
 import { PhzEngine } from '../src/preview/engine';
@@ -113,6 +115,7 @@ const CASES: Record<string, () => Promise<number> | number> = {
   deltaload: async () => (await benchDeltaload()).nsPerCall,
   plot1000: benchPlot1000,
   replot50: benchReplot50,
+  schedule500: () => benchSchedule(500),
   sheetPlan: () => benchPlan(),
   sheetWrite: () => benchWrite(),
   ...workbookCases,
@@ -172,6 +175,8 @@ async function main(): Promise<void> {
   row('Phasor plot: geometry + SVG text, 1,000 phasors', `${plot.toFixed(2)} ms`, plot <= 20 ? 'met (≤ 20 ms)' : 'NOT MET (≤ 20 ms)');
   const replot = measure('replot50');
   row('Phasor plot: re-plot of 50 phasors (read, lay out, SVG)', `${replot.toFixed(2)} ms`, replot <= 5 ? 'met (≤ 5 ms)' : 'NOT MET (≤ 5 ms)');
+  const sched = measure('schedule500');
+  row('PHZ.SCHEDULE, 500 ways (read the cells, aggregate, format 4×5; harmonics)', `${sched.toFixed(0)} µs`, sched <= 1000 ? 'met (≤ 1 ms)' : 'NOT MET (≤ 1 ms)');
   const big = largest();
   const plan = measure('sheetPlan');
   row(`Worked sheet: plan "${big.calc.name}" (${big.cells} cells)`, `${plan.toFixed(0)} µs`, plan <= 1000 ? 'met (≤ 1 ms)' : 'NOT MET (≤ 1 ms)');

@@ -10,6 +10,7 @@ import { setsFunctions } from './sets';
 import { loadsFunctions } from './loads';
 import { solversFunctions } from './solvers';
 import { neutralFunctions } from './neutral';
+import { feedersFunctions } from './feeders';
 import { sequencesFunctions } from './sequences';
 import { unbalanceFunctions } from './unbalance';
 
@@ -23,6 +24,7 @@ export const specs: readonly FunctionSpec[] = [
   ...loadsFunctions,
   ...solversFunctions,
   ...neutralFunctions,
+  ...feedersFunctions,
   ...sequencesFunctions,
   ...unbalanceFunctions,
 ];

@@ -3,7 +3,7 @@
  * (functions.json, through a generated declarations file), the preview engine, the
  * pane's reference and the README reference are all generated from these specs.
  */
-export type Group = 'values' | 'arithmetic' | 'sets' | 'loads' | 'solvers' | 'neutral' | 'sequences' | 'unbalance';
+export type Group = 'values' | 'arithmetic' | 'sets' | 'loads' | 'solvers' | 'neutral' | 'feeders' | 'sequences' | 'unbalance';
 
 export const GROUP_TITLES: Record<Group, string> = {
   values: 'Values and forms',
@@ -12,6 +12,7 @@ export const GROUP_TITLES: Record<Group, string> = {
   loads: 'Loads and powers',
   solvers: 'Star and delta solvers',
   neutral: 'Neutral current and sizing',
+  feeders: 'Panel schedules and feeders',
   sequences: 'Symmetrical components',
   unbalance: 'Unbalance',
 };

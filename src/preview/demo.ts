@@ -55,6 +55,7 @@ type Line =
     };
 
 export const DEMO_SHEET = 'Sub-board';
+export const PANEL_SHEET = 'Schedule DB-OW1';
 export const EXAMPLES_SHEET = 'Examples';
 
 const PHASE_COLUMNS = ['B', 'C', 'D'] as const;
@@ -201,6 +202,63 @@ export const SUB_BOARD: readonly Line[] = [
   },
 ];
 
+/** One way of the panel-schedule demo: columns A–G of its row. */
+export interface Way {
+  readonly way: string;
+  readonly description: string;
+  readonly connection: string;
+  /** Blank for a spare way. */
+  readonly load: string | number | null;
+  readonly pf: string | number | null;
+  readonly nonlinear: string | number | null;
+  readonly demand: string | number | null;
+}
+
+/**
+ * The panel-schedule scenario: board DB-OW1 of a small office and joinery workshop, fed at
+ * 400/230 V. Every number is invented for the demo; connections are written the several ways
+ * schedules write them.
+ */
+export const PANEL_WAYS: readonly Way[] = [
+  { way: '1', description: 'Office lighting, ground floor (LED)', connection: 'L1', load: '1.2 kW', pf: 0.95, nonlinear: 0.9, demand: 1 },
+  { way: '2', description: 'Office lighting, first floor (LED)', connection: 'L2', load: '1.1 kW', pf: 0.95, nonlinear: 0.9, demand: 1 },
+  { way: '3', description: 'Workshop high-bay lighting (LED)', connection: 'L3', load: '2.4 kW', pf: 0.96, nonlinear: 0.9, demand: 1 },
+  { way: '4', description: 'Sockets, open-plan office A (PCs)', connection: 'A', load: '2.8 kVA', pf: 0.9, nonlinear: '80 %', demand: '60 %' },
+  { way: '5', description: 'Sockets, open-plan office B (PCs)', connection: 'B', load: '2.6 kVA', pf: 0.9, nonlinear: '80 %', demand: '60 %' },
+  { way: '6', description: 'Sockets, reception and meeting room', connection: 'C', load: '1.5 kVA', pf: 0.92, nonlinear: '70 %', demand: '60 %' },
+  { way: '7', description: 'Server rack UPS', connection: '1', load: '3 kVA', pf: '0.98 lead', nonlinear: 0.3, demand: 1 },
+  { way: '8', description: 'Kitchenette water heater', connection: '2', load: '3 kW', pf: 1, nonlinear: 0, demand: 1 },
+  { way: '9', description: 'Kitchenette sockets', connection: '3', load: '2 kW', pf: 1, nonlinear: 0, demand: '50 %' },
+  { way: '10', description: 'Welding set, 400 V single-phase', connection: 'L1-L2', load: '9 kVA', pf: 0.7, nonlinear: 0, demand: '40 %' },
+  { way: '11', description: 'Drying-room heater, 400 V', connection: 'BC', load: '6 kW', pf: 1, nonlinear: 0, demand: 1 },
+  { way: '12', description: 'Planer-thicknesser, 400 V two-line', connection: '3-1', load: '3.7 kW', pf: 0.82, nonlinear: 0, demand: 1 },
+  { way: '13', description: 'Air compressor', connection: '3P', load: '7.5 kW', pf: 0.85, nonlinear: 0, demand: 1 },
+  { way: '14', description: 'Dust extractor', connection: '3P', load: '5.5 kW', pf: 0.84, nonlinear: 0, demand: 1 },
+  { way: '15', description: 'Heat-pump condenser (inverter)', connection: 'ABC', load: '11 kW', pf: 0.88, nonlinear: 0.2, demand: 1 },
+  { way: '16', description: 'Metal lathe', connection: '123', load: '4 kW', pf: 0.8, nonlinear: 0, demand: '50 %' },
+  { way: '17', description: 'Workshop bench sockets 1', connection: 'L1', load: '2.5 kVA', pf: 0.85, nonlinear: 0.3, demand: '50 %' },
+  { way: '18', description: 'Workshop bench sockets 2', connection: 'L2', load: '2.5 kVA', pf: 0.85, nonlinear: 0.3, demand: '50 %' },
+  { way: '19', description: 'Workshop bench sockets 3', connection: 'L3', load: '2.5 kVA', pf: 0.85, nonlinear: 0.3, demand: '50 %' },
+  { way: '20', description: 'Hand dryers', connection: 'L1', load: '1.8 kW', pf: 1, nonlinear: 0, demand: 1 },
+  { way: '21', description: 'Van charging point, 230 V', connection: 'L2', load: '7.2 kW', pf: 0.99, nonlinear: 0.1, demand: 1 },
+  { way: '22', description: 'Outdoor and yard lighting (LED)', connection: 'L3', load: '0.6 kW', pf: 0.95, nonlinear: 0.9, demand: 1 },
+  { way: '23', description: 'Fire alarm panel', connection: 'L1', load: '0.2 kVA', pf: 0.9, nonlinear: 0.5, demand: 1 },
+  { way: '24', description: 'Access control and intruder alarm', connection: 'L2', load: '0.15 kVA', pf: 0.9, nonlinear: 0.5, demand: 1 },
+  { way: '25', description: 'Network switch cabinet', connection: 'L3', load: '0.8 kVA', pf: '0.97 lead', nonlinear: 0.9, demand: 1 },
+  { way: '26', description: 'Spare (three-phase)', connection: '3P', load: null, pf: null, nonlinear: null, demand: null },
+  { way: '27', description: 'Spare', connection: 'L1', load: null, pf: null, nonlinear: null, demand: null },
+  { way: '28', description: 'Spare (400 V)', connection: 'L1-L2', load: 0, pf: null, nonlinear: null, demand: null },
+];
+
+/** Harmonic content of the non-linear part of the loads (percent of its fundamental current): our own estimate for switch-mode supplies and LED drivers. */
+export const PANEL_HARMONICS: ReadonlyArray<readonly [number, number]> = [
+  [3, 78],
+  [5, 52],
+  [7, 30],
+  [9, 14],
+  [11, 8],
+];
+
 /** Names of the PHZ functions a formula calls. */
 export function functionsIn(formula: string): string[] {
   return [...formula.matchAll(/PHZ\.([A-Z0-9_]+)\s*\(/gi)].map((m) => m[1].toUpperCase());
@@ -334,6 +392,8 @@ export function loadDemo(engine: PhzEngine, specs: readonly FunctionSpec[]): Dem
     }
   }
 
+  loadPanelSheet(engine, available, report);
+
   // ---- every registry function's first example, live
   engine.change((h) => h.addSheet(EXAMPLES_SHEET));
   const ex = hf.getSheetId(EXAMPLES_SHEET) ?? 1;
@@ -355,7 +415,114 @@ export function loadDemo(engine: PhzEngine, specs: readonly FunctionSpec[]): Dem
 
   for (const name of leftovers) {
     const id = hf.getSheetId(name);
-    if (id !== undefined && name !== DEMO_SHEET && name !== EXAMPLES_SHEET) engine.change((h) => h.removeSheet(id));
+    if (id !== undefined && name !== DEMO_SHEET && name !== PANEL_SHEET && name !== EXAMPLES_SHEET) engine.change((h) => h.removeSheet(id));
   }
   return report;
+}
+
+/**
+ * The panel-schedule sheet: supply, the schedule of PANEL_WAYS with each way's complex power,
+ * the harmonic table, the board totals by PHZ.SCHEDULE, the feeder's voltage drop with the
+ * actual neutral current (PHZ.VOLTDROP) and a neutral sizing row. A formula whose functions
+ * the registry lacks is left out, with everything that reads it.
+ */
+function loadPanelSheet(engine: PhzEngine, available: ReadonlySet<string>, report: DemoReport): void {
+  engine.change((h) => h.addSheet(PANEL_SHEET));
+  const sheet = engine.hf.getSheetId(PANEL_SHEET) ?? 0;
+  const put = (row: number, col: number, content: RawCellContent): void => engine.setContents({ sheet, row, col }, [[content]]);
+  const style = (row: number, col: number, kind: 'title' | 'note' | 'heading'): void => {
+    report.styles.push({ sheet: PANEL_SHEET, row, col, style: kind });
+  };
+  const heading = (row: number, cells: readonly string[]): void => {
+    engine.setContents({ sheet, row, col: 0 }, [cells.map((c) => (c === '' ? null : c))]);
+    cells.forEach((_, col) => style(row, col, 'heading'));
+  };
+  const left: string[] = [];
+  /** Writes a formula when the registry has its functions; returns whether it did. */
+  const formula = (row: number, col: number, f: string, label: string): boolean => {
+    if (!functionsIn(f).every((n) => available.has(n))) {
+      left.push(label);
+      return false;
+    }
+    put(row, col, f);
+    report.formulas.push({ sheet: PANEL_SHEET, address: a1({ row, col }), formula: f });
+    return true;
+  };
+
+  put(0, 0, 'Board DB-OW1, office and joinery workshop: panel schedule, neutral and feeder check');
+  style(0, 0, 'title');
+  put(1, 0, 'Demo scenario with invented numbers. Connections are written the several ways schedules write them (L1, A, 1; L1-L2, BC, 3-1; 3P, ABC, 123); loads in W, kW, VA or kVA; "0.98 lead" marks a leading power factor; a blank load is a spare way.');
+  style(1, 0, 'note');
+  put(2, 0, 'Results inform design only. Conductor sizing, protection and neutral arrangements follow the locally adopted wiring rules and must be checked by a competent, licensed person; work on live systems is for qualified people only.');
+  style(2, 0, 'note');
+
+  heading(4, ['Supply', 'Value', 'Unit', 'Notes']);
+  const supplyTop = 5;
+  ['230∠0', '230∠-120', '230∠120'].forEach((v, k) => {
+    engine.setContents({ sheet, row: supplyTop + k, col: 0 }, [[`Phase voltage E${k + 1}`, v, 'V', k === 0 ? '400/230 V at the main switchboard' : null]]);
+  });
+  const supply = `B${supplyTop + 1}:B${supplyTop + 3}`;
+
+  const head = 9;
+  heading(head, ['Way', 'Description', 'Connection', 'Load', 'Power factor', 'Non-linear share', 'Demand factor', 'S after demand (VA)']);
+  const top = head + 1;
+  PANEL_WAYS.forEach((w, i) => {
+    engine.setContents({ sheet, row: top + i, col: 0 }, [[w.way, w.description, w.connection, w.load, w.pf, w.nonlinear, w.demand]]);
+    formula(top + i, 7, `=PHZ.LOADPOWER(D${top + i + 1},E${top + i + 1},G${top + i + 1})`, `S of way ${w.way}`);
+  });
+  const bottom = top + PANEL_WAYS.length; // 1-based row of the last way
+  const col = (c: string): string => `${c}${top + 1}:${c}${bottom}`;
+
+  const hHead = bottom + 1;
+  heading(hHead, ['Harmonics of the non-linear part', 'Order', '% of its fundamental', '', '', 'Notes']);
+  const ordinal: Record<number, string> = { 3: 'Third', 5: 'Fifth', 7: 'Seventh', 9: 'Ninth', 11: 'Eleventh' };
+  PANEL_HARMONICS.forEach(([order, pct], i) => {
+    engine.setContents({ sheet, row: hHead + 1 + i, col: 0 }, [[ordinal[order] ?? `Order ${order}`, order, pct, null, null, i === 0 ? 'Switch-mode supplies and LED drivers (our estimate)' : null]]);
+  });
+  const harmonics = `B${hHead + 2}:C${hHead + 1 + PANEL_HARMONICS.length}`;
+
+  const tHead = hHead + 1 + PANEL_HARMONICS.length + 1;
+  heading(tHead, ['Board totals (PHZ.SCHEDULE)', '', '', '', '', '']);
+  const tTop = tHead + 1;
+  const totals = formula(
+    tTop,
+    0,
+    `=PHZ.SCHEDULE(${supply},${col('C')},${col('D')},${col('E')},${col('F')},${col('G')},${harmonics},TRUE)`,
+    'Board totals',
+  );
+  // with labels: header row, lines 1–3, then the neutral row; values from column B
+  const lineCurrents = `B${tTop + 2}:B${tTop + 4}`;
+  const neutralRow = tTop + 5; // 1-based
+
+  const fHead = tTop + 6;
+  heading(fHead, ['Feeder from the main switchboard', 'Value', 'Unit', 'Notes']);
+  engine.setContents({ sheet, row: fHead + 1, col: 0 }, [['Conductor R + jX per km', '0.927+j0.08', 'Ω/km', '4-core 25 mm² copper at 90 °C; the neutral is the same']]);
+  engine.setContents({ sheet, row: fHead + 2, col: 0 }, [['Route length', 0.038, 'km', null]]);
+  engine.setContents({ sheet, row: fHead + 3, col: 0 }, [['Nominal voltage, line to line', 400, 'V', null]]);
+  const z = `B${fHead + 2}`;
+  const len = `B${fHead + 3}`;
+
+  const dHead = fHead + 5;
+  heading(dHead, ['Feeder voltage drop with the actual neutral current (PHZ.VOLTDROP, 3P4W)', '', '', '', '', '']);
+  const dTop = dHead + 1;
+  const drop = totals && formula(dTop, 0, `=PHZ.VOLTDROP(${lineCurrents},${z},${len},"3P4W",${supply},,,TRUE)`, 'Feeder voltage drop');
+
+  const nHead = dTop + 5;
+  heading(nHead, ['Neutral sizing', 'Value', 'Unit', 'How']);
+  if (totals) {
+    const demand = formula(nHead + 1, 1, `=PHZ.NEUTRALDEMAND(D${neutralRow})`, 'Feeder neutral load');
+    put(nHead + 1, 0, 'Feeder neutral load, NFPA 70 220.61');
+    engine.setContents({ sheet, row: nHead + 1, col: 2 }, [['A', 'From the maximum unbalanced load (D of the neutral row)']]);
+    engine.setContents({ sheet, row: nHead + 2, col: 0 }, [['rms neutral current with harmonics', `=C${neutralRow}`, 'A', 'Triplens of the line-to-neutral non-linear loads add']]);
+    report.formulas.push({ sheet: PANEL_SHEET, address: `B${nHead + 3}`, formula: `=C${neutralRow}` });
+    if (demand) {
+      engine.setContents({ sheet, row: nHead + 3, col: 0 }, [['Neutral to size for (the larger)', `=MAX(B${nHead + 2},B${nHead + 3})`, 'A', 'Then the locally adopted rules and a competent, licensed person']]);
+      report.formulas.push({ sheet: PANEL_SHEET, address: `B${nHead + 4}`, formula: `=MAX(B${nHead + 2},B${nHead + 3})` });
+    }
+    if (drop) {
+      engine.setContents({ sheet, row: nHead + 4, col: 0 }, [['Largest feeder drop', `=MAX(D${dTop + 2}:D${dTop + 4})`, '%', 'Limits: the locally adopted rules']]);
+      report.formulas.push({ sheet: PANEL_SHEET, address: `B${nHead + 5}`, formula: `=MAX(D${dTop + 2}:D${dTop + 4})` });
+    }
+  }
+  report.skipped.push(...left);
 }

@@ -42,9 +42,25 @@ export const MAX_COLUMNS = 16_384;
 export const MESSAGE_LIMIT = 300;
 
 /**
- * Engine value → display value. Numbers keep 15 significant figures, as Excel keeps them
- * (rounded here rather than by the engine, whose rounding turns numbers below about 1e-294
- * into NaN); a value that is not finite becomes an error.
+ * The engine rounds a value it hands out to `precisionRounding` places after its leading
+ * digit by multiplying with 10^(14 − exponent), which overflows for numbers below about
+ * 1e-294: 1e-300 came out as NaN. The rounding is patched (once, on its class) to hand such
+ * a number out unrounded; `toDisplay` then keeps 15 figures of it.
+ */
+function keepTinyNumbers(hf: HyperFormula): void {
+  const exporter = (hf as unknown as { _exporter?: object })._exporter;
+  const proto = exporter ? (Object.getPrototypeOf(exporter) as { cellValueRounding?: (v: number) => number }) : undefined;
+  const round = proto?.cellValueRounding;
+  if (!proto || typeof round !== 'function') return;
+  proto.cellValueRounding = function (this: unknown, value: number): number {
+    const rounded = round.call(this, value);
+    return Number.isFinite(rounded) ? rounded : value;
+  };
+}
+
+/**
+ * Engine value → display value. Numbers keep 15 significant figures, as Excel keeps them;
+ * a value that is not finite becomes an error.
  */
 export function toDisplay(v: CellValue): DisplayValue {
   if (v instanceof DetailedCellError) return { error: v.value, message: clipMiddle(v.message ?? '', MESSAGE_LIMIT) };
@@ -122,12 +138,14 @@ export class PhzEngine {
     registerRegistry(options.registry ?? defaultRegistry);
     // Excel keeps 15 significant figures of a number; the engine's default hands out 11
     // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures.
-    // Rounding to 15 figures happens in `toDisplay` (smartRounding off; see there).
+    // Excel keeps 15 significant figures of a number; the engine's default hands out 11
+    // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures. Its
+    // rounding also snaps sums that cancel to 0, as Excel does (smartRounding).
     const config = {
       licenseKey: LICENSE_KEY,
       undoLimit: 0,
       useArrayArithmetic: true,
-      smartRounding: false,
+      precisionRounding: 14,
       maxRows: MAX_ROWS,
       maxColumns: MAX_COLUMNS,
     };
@@ -136,6 +154,7 @@ export class PhzEngine {
       // the patch goes on the graph's class, so engines built from sheets get it from the start
       const probe = HyperFormula.buildEmpty({ licenseKey: LICENSE_KEY });
       indexDependencyGraph(probe);
+      keepTinyNumbers(probe);
       probe.destroy();
       graphPatched = true;
     }

@@ -77,7 +77,9 @@ export class PreviewPlotPort implements PlotPort {
     }
     const dims = this.workbook.hf.getSheetDimensions(this.workbook.sheetId(request.sheet));
     const first = parseA1(request.phasors[0].cell.split(':')[0]);
-    const at = anchor ? { row: anchor.row, col: anchor.col + HELPER_COLUMNS + 1 } : { row: first?.row ?? 0, col: dims.width + 1 };
+    const at =
+      (request.chartCell ? parseA1(request.chartCell) : undefined) ??
+      (anchor ? { row: anchor.row, col: anchor.col + HELPER_COLUMNS + 1 } : { row: first?.row ?? 0, col: dims.width + 1 });
     const helperSheet = anchor ? request.sheet : freshSheetName(names);
     const plan = planChart(request, helperSheet, anchor?.row ?? 0, anchor?.col ?? 0, a1(at));
     if (!anchor) this.workbook.addSheet(helperSheet);

@@ -49,6 +49,11 @@ export interface PhasorChartRequest {
    * left out: the adapter finds free space. Never over cells the user owns.
    */
   readonly anchor?: string;
+  /**
+   * Top-left cell (A1, on `sheet`) for the chart itself, e.g. a place a worked sheet keeps for
+   * it; left out: beside the helper cells at `anchor`, or right of the sheet's used cells.
+   */
+  readonly chartCell?: string;
 }
 
 /** What a chart insertion did, for the status line. */

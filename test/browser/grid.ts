@@ -46,6 +46,13 @@ export async function cellText(page: Page, address: string): Promise<string> {
 
 let demoColumnA: Map<string, number> | undefined;
 let demoError: string | undefined;
+let demoSheets: string[] = [];
+
+/** The demo's sheets, in order. */
+export function demoSheetNames(): string[] {
+  demoRow('Phase current');
+  return demoSheets;
+}
 
 /** The demo cell that shows an error on purpose (`B97`). */
 export function intendedError(): string {
@@ -58,7 +65,8 @@ export function demoRow(label: string): number {
   if (!demoColumnA) {
     const engine = new PhzEngine();
     const report = loadDemo(engine, specs);
-    demoError = report.intendedErrors[0].split('!')[1];
+    demoError = report.intendedErrors.find((e) => e.startsWith(`${DEMO_SHEET}!`))!.split('!')[1];
+    demoSheets = engine.hf.getSheetNames();
     const id = engine.hf.getSheetId(DEMO_SHEET)!;
     demoColumnA = new Map();
     const height = engine.hf.getSheetDimensions(id).height;

@@ -94,7 +94,7 @@ describe('preview workbook in the browser', () => {
     expect(await errorCell.getAttribute('class')).toContain('k-error');
     expect(((await errorCell.getAttribute('title')) ?? '').length).toBeGreaterThan(10);
     await page.evaluate(() => document.querySelector('.pv-scroll')!.scrollTo(0, 0));
-    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Examples']);
+    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Schedule DB-OW1', 'Examples']);
   });
 
   it('fits the window: the page itself never scrolls, the grid and the pane scroll inside', async () => {
@@ -233,13 +233,13 @@ describe('preview workbook in the browser', () => {
 
   it('adds a sheet and switches between sheets', async () => {
     await page.getByRole('button', { name: 'Add sheet' }).click();
-    await expect.poll(() => page.locator('.pv-tabs button[role="tab"]').count()).toBe(3);
+    await expect.poll(() => page.locator('.pv-tabs button[role="tab"]').count()).toBe(4);
     const tab = page.locator('.pv-tabs button[role="tab"][aria-selected="true"]');
-    expect(await tab.textContent()).toBe('Sheet3');
+    expect(await tab.textContent()).toBe('Sheet4');
     await typeInto('A1', '42');
     await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Examples' }).click();
     await expect.poll(() => text('A1')).toContain('example');
-    await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Sheet3' }).click();
+    await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Sheet4' }).click();
     await expect.poll(() => text('A1')).toBe('42');
     await page.locator('.pv-tabs button[role="tab"]', { hasText: 'Sub-board' }).click();
   });

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { functions, specByName, specs } from '../../src/functions';
 import type { FunctionSpec } from '../../src/functions/spec';
-import { DEMO_SHEET, EXAMPLES_SHEET, SUB_BOARD, functionsIn, loadDemo } from '../../src/preview/demo';
+import { DEMO_SHEET, EXAMPLES_SHEET, PANEL_SHEET, SUB_BOARD, functionsIn, loadDemo } from '../../src/preview/demo';
 import { a1 } from '../../src/preview/address';
 import { PhzEngine, isDisplayError } from '../../src/preview/engine';
 
@@ -35,8 +35,8 @@ const usedByScenario = new Set(
 describe('demo workbook with the whole registry', () => {
   const { engine, report, errors } = load(specs);
 
-  it('has the scenario sheet and the examples sheet, nothing else', () => {
-    expect(engine.hf.getSheetNames()).toEqual([DEMO_SHEET, EXAMPLES_SHEET]);
+  it('has the two scenario sheets and the examples sheet, nothing else', () => {
+    expect(engine.hf.getSheetNames()).toEqual([DEMO_SHEET, PANEL_SHEET, EXAMPLES_SHEET]);
   });
 
   it('shows no error in any cell but the one that shows an error on purpose', () => {
@@ -48,9 +48,9 @@ describe('demo workbook with the whole registry', () => {
     expect(isDisplayError(shown) && shown.message.length > 0).toBe(true);
   });
 
-  it('uses every function group the registry has on the scenario sheet', () => {
+  it('uses every function group the registry has on the scenario sheets', () => {
     const groups = new Set(
-      report.formulas.filter((f) => f.sheet === DEMO_SHEET).flatMap((f) => functionsIn(f.formula).map((n) => specByName[n].group)),
+      report.formulas.filter((f) => f.sheet !== EXAMPLES_SHEET).flatMap((f) => functionsIn(f.formula).map((n) => specByName[n].group)),
     );
     expect([...groups].sort()).toEqual([...new Set(specs.map((s) => s.group))].sort());
   });

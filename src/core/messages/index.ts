@@ -9,3 +9,4 @@ export { threePhaseMessages } from './threephase';
 export { plotMessages } from './plot';
 export { workbookMessages } from './workbook';
 export { clipMiddle, excerpt, quoted, EXCERPT_LENGTH } from './quote';
+export { feederMessages } from './feeders';

@@ -12,3 +12,6 @@ export * from './linear';
 export * from './neutral';
 export * from './sequences';
 export * from './unbalance';
+export * from './schedule';
+export * from './drop';
+export * from './losses';

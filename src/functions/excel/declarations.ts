@@ -371,6 +371,21 @@ export function STARLOAD(phase_voltages: any[][], impedances: any[][], neutral?:
 }
 
 /**
+ * Losses in the lines and the neutral, source complex power and the voltage drop at each load of a star load (STARLOAD’s arguments).
+ * @customfunction STARLOSSES
+ * @param {any[][]} phase_voltages Source phase voltages E1, E2, E3 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
+ * @param {any[][]} impedances Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.
+ * @param {any[][]} [neutral] Left out or 0 = solid neutral; an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral. Not a blank cell.
+ * @param {any[][]} [line] Line impedance: one for every line, or three (default none).
+ * @param {any} [labels] TRUE adds a header row and a label column (default FALSE).
+ * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
+ * @returns {any[][]} A 4×3 table (5×4 with labels): rows lines 1–3 [line loss, source power (polar text), drop at the load %]; row 4 [neutral loss, total source power, largest drop %].
+ */
+export function STARLOSSES(phase_voltages: any[][], impedances: any[][], neutral?: any[][], line?: any[][], labels?: any, digits?: any): any[][] {
+  return invoke('STARLOSSES', [phase_voltages, impedances, neutral, line, labels, digits]);
+}
+
+/**
  * Solves a delta load from its line-to-line voltages: line currents, branch currents, branch voltages and powers.
  * @customfunction DELTALOAD
  * @param {any[][]} line_voltages Line-to-line voltages V12, V23, V31 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
@@ -382,6 +397,20 @@ export function STARLOAD(phase_voltages: any[][], impedances: any[][], neutral?:
  */
 export function DELTALOAD(line_voltages: any[][], impedances: any[][], line?: any[][], labels?: any, digits?: any): any[][] {
   return invoke('DELTALOAD', [line_voltages, impedances, line, labels, digits]);
+}
+
+/**
+ * Losses in the lines, source complex power and the voltage drop at each branch of a delta load (DELTALOAD’s arguments).
+ * @customfunction DELTALOSSES
+ * @param {any[][]} line_voltages Line-to-line voltages V12, V23, V31 (three): text such as 230∠-120 or 7+j5, numbers, or two numeric columns (real, imaginary).
+ * @param {any[][]} impedances Branch impedances Z12, Z23, Z31 (three, or one for all); "open" for a missing branch.
+ * @param {any[][]} [line] Line impedance: one for every line, or three (default none).
+ * @param {any} [labels] TRUE adds a header row and a label column (default FALSE).
+ * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
+ * @returns {any[][]} A 4×3 table (5×4 with labels): rows 1–3 [line loss, source power (polar text), drop at the branch %]; row 4 [0, total source power, largest drop %].
+ */
+export function DELTALOSSES(line_voltages: any[][], impedances: any[][], line?: any[][], labels?: any, digits?: any): any[][] {
+  return invoke('DELTALOSSES', [line_voltages, impedances, line, labels, digits]);
 }
 
 /**
@@ -448,6 +477,55 @@ export function SIZINGCURRENT(design_current: any, third_harmonic_pct: any): any
  */
 export function NEUTRALDEMAND(unbalanced_load: any, nonlinear_load?: any): any[][] {
   return invoke('NEUTRALDEMAND', [unbalanced_load, nonlinear_load]);
+}
+
+/**
+ * Panel schedule → line currents, neutral current (fundamental and rms with harmonics), per-line powers, maximum unbalanced load and current unbalance.
+ * @customfunction SCHEDULE
+ * @param {any[][]} supply Phase voltages E1, E2, E3 (e.g. PHZ.BALANCED(230)), or one phase voltage for a balanced supply (230).
+ * @param {any[][]} connections Column of connections: 1, L1, A; 1-2, L1-L2, AB; 3P, 123, ABC (any case).
+ * @param {any[][]} loads Column of loads: a number is W; or text in W, kW, VA, kVA ("2.2 kW"). Blank or 0 = spare.
+ * @param {any[][]} power_factors Column of power factors (or one for all), lagging; "0.9 lead" for leading. Not negative.
+ * @param {any[][]} [nonlinear] Non-linear share of each load, 0 to 1 or "40 %" (or one for all; default 0).
+ * @param {any[][]} [demand] Demand factor of each load, 0 to 1 or "80 %" (or one for all; default 1).
+ * @param {any[][]} [harmonics] Harmonics of the non-linear part: rows [order, percent] or [order, p1, p2, p3].
+ * @param {any} [labels] TRUE adds a header row and a label column (default FALSE).
+ * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
+ * @returns {any[][]} A 4×5 table (5×6 with labels): rows lines 1–3 [I (polar text), |I|, P, Q, S]; row 4 [I_N (polar text), I_N rms, max unbalanced L-N load, current unbalance %, |total S|].
+ */
+export function SCHEDULE(supply: any[][], connections: any[][], loads: any[][], power_factors: any[][], nonlinear?: any[][], demand?: any[][], harmonics?: any[][], labels?: any, digits?: any): any[][] {
+  return invoke('SCHEDULE', [supply, connections, loads, power_factors, nonlinear, demand, harmonics, labels, digits]);
+}
+
+/**
+ * Complex power S = P + jQ of each circuit of a schedule, from its load in W, kW, VA or kVA and its power factor.
+ * @customfunction LOADPOWER
+ * @param {any[][]} load Loads: a number is W; or text in W, kW, VA, kVA ("2.2 kW"). Blank or 0 = spare (S = 0).
+ * @param {any[][]} power_factor Power factors (a column, or one for all), lagging; "0.9 lead" for leading. Not negative.
+ * @param {any[][]} [demand] Demand factors, 0 to 1 or "80 %" (a column, or one for all; default 1).
+ * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
+ * @returns {any[][]} Polar text, one row per load: S in VA when the loads are in W or VA.
+ */
+export function LOADPOWER(load: any[][], power_factor: any[][], demand?: any[][], digits?: any): any[][] {
+  return invoke('LOADPOWER', [load, power_factor, demand, digits]);
+}
+
+/**
+ * Voltage drop of a circuit or feeder: the exact phasor drop, in V and % of nominal, beside the IEC 60364-5-52 Annex G approximation.
+ * @customfunction VOLTDROP
+ * @param {any[][]} current Load current in A or load in W/VA ("40 kW"); for "3P4W" the three line currents as phasors.
+ * @param {any[][]} impedance R + jX of one line conductor per unit length, e.g. 0.524+j0.085 (Ω/km, with length in km).
+ * @param {any} length Route length (one way), in the length unit of the impedance.
+ * @param {any} system "1P" single-phase two-wire, "3P" three-phase balanced, "3P4W" four-wire with the neutral current.
+ * @param {any[][]} voltage Nominal voltage: 1P the circuit’s; 3P and 3P4W line to line; or for 3P4W the phase voltages.
+ * @param {any} [power_factor] Load power factor for 1P and 3P, lagging; "0.9 lead" for leading. Not for 3P4W.
+ * @param {any[][]} [neutral_impedance] Return or neutral conductor R + jX per unit length (default: as impedance).
+ * @param {any} [labels] TRUE adds a header row and a label column (default FALSE).
+ * @param {any} [digits] Significant figures of the text result, 1 to 15 (default 6).
+ * @returns {any[][]} A 1×5 row (3×5 for "3P4W", one row per phase; with labels a header and a label column): [phasor drop, drop V, drop %, approximation V, approximation %].
+ */
+export function VOLTDROP(current: any[][], impedance: any[][], length: any, system: any, voltage: any[][], power_factor?: any, neutral_impedance?: any[][], labels?: any, digits?: any): any[][] {
+  return invoke('VOLTDROP', [current, impedance, length, system, voltage, power_factor, neutral_impedance, labels, digits]);
 }
 
 /**

@@ -81,6 +81,7 @@ export function checkChartRequest(request: PhasorChartRequest): void {
   if (n > CHART_MAX_PHASORS) throw new PhzError(M.chartTooMany(n, CHART_MAX_PHASORS));
   for (const p of request.phasors) if (!isCellOrPair(p.cell)) throw new PhzError(M.chartBadCell(p.cell));
   if (request.anchor !== undefined && !parseA1(request.anchor)) throw new PhzError(M.chartBadCell(request.anchor));
+  if (request.chartCell !== undefined && !parseA1(request.chartCell)) throw new PhzError(M.chartBadCell(request.chartCell));
 }
 
 function isCellOrPair(cell: string): boolean {

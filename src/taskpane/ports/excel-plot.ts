@@ -123,7 +123,8 @@ export const excelPlotPort: PlotPort = {
       // The chart goes beside the helper block (anchor) or right of the used cells of the sheet.
       const chartCol = anchor ? anchor.col + HELPER_COLUMNS + 1 : used.isNullObject ? 0 : used.columnIndex + used.columnCount + 1;
       const chartRow = anchor ? anchor.row : used.isNullObject ? 0 : used.rowIndex;
-      const plan = planChart(request, helperName, anchor?.row ?? 0, anchor?.col ?? 0, `${columnLetters(chartCol)}${chartRow + 1}`);
+      const chartCell = request.chartCell ?? `${columnLetters(chartCol)}${chartRow + 1}`;
+      const plan = planChart(request, helperName, anchor?.row ?? 0, anchor?.col ?? 0, chartCell);
 
       // Second round trip: helper cells, chart, series, formats.
       const helper = anchor ? source : sheets.add(helperName);

@@ -10,7 +10,7 @@ import type { Quantity } from '../../core/parse';
 import { readChoice, readNumber, readPhasor } from '../../functions/readers';
 import type { SheetPlan } from './plan';
 
-export type FieldKind = 'phasor' | 'number' | 'choice';
+export type FieldKind = 'phasor' | 'number' | 'choice' | 'text';
 
 export interface FieldSpec {
   /** The symbol, also the field's id and the start of its label: `E1`, `ZL2`, `pf3`. */
@@ -35,6 +35,12 @@ export interface FieldSpec {
   readonly group: string;
   /** The sheet name of its input cell; default made from the id (`E1` → `E_1`). */
   readonly name?: string;
+  /**
+   * Reads the field's text when the shared readers by kind do not fit (a schedule's
+   * connection, load or power factor): returns what the sheet gets, or throws PhzError with
+   * the function's message naming the field. Required for kind `text`.
+   */
+  readonly read?: (text: string, id: string) => FieldValue;
 }
 
 /** A field's value once read: what goes into the sheet's input cell. */
@@ -75,6 +81,8 @@ export interface Calculation {
  */
 export function readField(spec: FieldSpec, text: string): FieldValue {
   const t = text.trim();
+  if (spec.read) return spec.read(t, spec.id);
+  if (spec.kind === 'text') throw new Error(`field ${spec.id} of kind text has no reader`);
   if (spec.kind === 'phasor') {
     readPhasor([[t === '' ? null : t]], spec.id, spec.expect ? { expect: spec.expect } : {});
     return t;

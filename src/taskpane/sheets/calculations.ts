@@ -6,8 +6,9 @@ import { starPower } from './star-power';
 import { delta } from './delta';
 import { unbalance } from './unbalance';
 import { neutralHarmonics } from './neutral-harmonics';
+import { panelSchedule } from './panel-schedule';
 
-export const calculations: readonly Calculation[] = [starNeutral, starOpen, starPower, delta, unbalance, neutralHarmonics];
+export const calculations: readonly Calculation[] = [starNeutral, starOpen, starPower, delta, unbalance, neutralHarmonics, panelSchedule];
 
 export function calculationById(id: string): Calculation {
   const c = calculations.find((x) => x.id === id);

@@ -242,7 +242,7 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
       } else {
         try {
           const chart = await port.insertPhasorChart({ ...plan.chart, sheet: result.sheet });
-          chartText = `Phasor chart ${chart.chartName} inserted, linked to ${chart.helperRange}.`;
+          chartText = `Inserted the linked chart “${chart.chartName}”; its helper cells are ${chart.helperRange}.`;
         } catch (e) {
           chartText = `The phasor chart could not be inserted (${message(e)}); its place is kept at ${cellA1(plan.chartArea.top, plan.chartArea.left)}.`;
         }

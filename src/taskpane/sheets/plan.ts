@@ -408,8 +408,15 @@ export class PlanBuilder {
     const top = this.row;
     this.put(top, COL.block, `=${formula}`, 'value');
     rowLabels.forEach((t, r) => this.put(top + r, COL.quantity, t, 'label'));
-    this.put(top, COL.formula, `=FORMULATEXT(${cellA1(top, COL.block)})`, 'formulaText');
     this.row += rowLabels.length;
+    if (columnLabels.length > COL.formula - COL.block) {
+      // a block wider than E:H would spill over the formula column: its formula text goes below it
+      const below = this.row++;
+      this.put(below, COL.quantity, 'Formula of the block above', 'label');
+      this.put(below, COL.block, `=FORMULATEXT(${cellA1(top, COL.block)})`, 'formulaText');
+    } else {
+      this.put(top, COL.formula, `=FORMULATEXT(${cellA1(top, COL.block)})`, 'formulaText');
+    }
     return (r, c) => cellA1(top + r, COL.block + c);
   }
 
@@ -490,16 +497,19 @@ export class PlanBuilder {
     const top = this.chartTop;
     const area = { top, left, bottom: top + CHART_ROWS - 1, right: left + CHART_COLS - 1 };
     this.put(top, left, `Phasor chart: ${this.chartTitle}`, 'heading');
+    const cols = Math.max(...this.cells.map((c) => c.col)) + 1;
+    const rows = Math.max(...this.cells.map((c) => c.row)) + 1;
+    // The chart's helper cells go below everything else on the sheet, from column B.
+    const helperAt = cellA1(Math.max(rows, top + CHART_ROWS) + 2, 1);
     this.put(
       top + 1,
       left,
-      'Reserved for the phasor chart of the values named below, linked to their cells. This host has not drawn it yet: the chart is inserted here when the pane can insert charts.',
+      `The phasor chart of the values named below goes here, linked to their cells through helper cells from ${helperAt}. ` +
+        'Where the host cannot insert charts this place stays empty: select the cells and use the pane’s Phasor plot.',
       'chart',
     );
     const listed = this.chartEntries.map((e) => `${e.label} (${this.at(e.name)})`).join(', ');
     this.put(top + 2, left, `Phasors: ${listed}.`, 'chart');
-    const cols = Math.max(...this.cells.map((c) => c.col)) + 1;
-    const rows = Math.max(...this.cells.map((c) => c.row)) + 1;
     return {
       calculation: this.header.calculation,
       title: this.header.title,
@@ -513,7 +523,8 @@ export class PlanBuilder {
       chart: {
         title: this.chartTitle,
         phasors: this.chartEntries.map((e) => ({ label: e.label, cell: this.at(e.name), group: e.group })),
-        anchor: cellA1(top + 3, left),
+        anchor: helperAt,
+        chartCell: cellA1(top + 3, left),
       },
       chartArea: area,
       extent: { rows: Math.max(rows, area.bottom + 1), cols: Math.max(cols, area.right + 1) },

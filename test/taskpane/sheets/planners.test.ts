@@ -10,6 +10,7 @@ import { calculationById, calculations } from '../../../src/taskpane/sheets/calc
 import { demoValues, readField, readFields } from '../../../src/taskpane/sheets/calculation';
 import { COL, F, cellA1, looksLikeAddress, nameOf, planGrid, uniqueSheetName, type SheetPlan } from '../../../src/taskpane/sheets/plan';
 import { magnitudesOnly } from '../../../src/taskpane/sheets/unbalance';
+import { parseA1 } from '../../../src/taskpane/plot/address';
 
 const META = { scenario: 'Planner test scenario', date: '2026-12-02' };
 const plans: Array<[string, SheetPlan]> = calculations.map((c) => [c.id, c.plan(demoValues(c), META)]);
@@ -22,7 +23,7 @@ function namesUsed(formula: string): string[] {
 }
 
 describe('the calculations', () => {
-  it('are the six of the issue, in the chooser’s order, with unique ids', () => {
+  it('are the six of the worked-sheet issue and the panel schedule, in the chooser’s order, with unique ids', () => {
     expect(calculations.map((c) => c.name)).toEqual([
       'Star load with neutral',
       'Star load without neutral',
@@ -30,8 +31,9 @@ describe('the calculations', () => {
       'Delta load',
       'Supply unbalance check',
       'Neutral with harmonics and sizing',
+      'Panel schedule',
     ]);
-    expect(new Set(calculations.map((c) => c.id)).size).toBe(6);
+    expect(new Set(calculations.map((c) => c.id)).size).toBe(7);
     expect(() => calculationById('nope')).toThrow(/star-neutral/);
   });
 
@@ -103,9 +105,9 @@ describe.each(plans)('plan %s', (id, plan) => {
     expect(at.size).toBe(plan.cells.length);
     for (const c of plan.cells) {
       const f = String(c.content);
-      const spill = /^=PHZ\.(STARLOAD|DELTALOAD|SEQCOMP|SIZINGCURRENT|LINESET)\(/.exec(f);
+      const spill = /^=PHZ\.(STARLOAD|DELTALOAD|SEQCOMP|SIZINGCURRENT|LINESET|SCHEDULE|VOLTDROP)\(/.exec(f);
       if (!spill) continue;
-      const [rows, cols] = { STARLOAD: [4, 3], DELTALOAD: [3, 4], SEQCOMP: [3, 1], SIZINGCURRENT: [1, 3], LINESET: [3, 1] }[spill[1]]!;
+      const [rows, cols] = { STARLOAD: [4, 3], DELTALOAD: [3, 4], SEQCOMP: [3, 1], SIZINGCURRENT: [1, 3], LINESET: [3, 1], SCHEDULE: [4, 5], VOLTDROP: [3, 5] }[spill[1]]!;
       for (let r = 0; r < rows; r++) for (let k = 0; k < cols; k++) if (r > 0 || k > 0) expect(at.has(`${c.row + r},${c.col + k}`), `${cellA1(c.row + r, c.col + k)} in the spill of ${f}`).toBe(false);
     }
   });
@@ -179,9 +181,15 @@ describe.each(plans)('plan %s', (id, plan) => {
     for (const p of plan.chart.phasors) expect(named.has(p.cell), p.label).toBe(true);
     expect(new Set(plan.chart.phasors.map((p) => p.group))).toContain('V');
     const place = plan.cells.filter((c) => c.row >= plan.chartArea.top && c.row <= plan.chartArea.bottom && c.col >= plan.chartArea.left);
-    expect(place.some((c) => /Reserved for the phasor chart/.test(String(c.content)))).toBe(true);
+    expect(place.some((c) => /The phasor chart of the values named below goes here/.test(String(c.content)))).toBe(true);
     // nothing else is written inside the chart area
     expect(place.every((c) => c.role === 'chart' || c.role === 'heading')).toBe(true);
+    // the chart goes into that place; its helper cells go below everything the plan writes
+    const chartAt = parseA1(plan.chart.chartCell!)!;
+    expect(chartAt.row).toBeGreaterThan(plan.chartArea.top);
+    expect(chartAt.row).toBeLessThanOrEqual(plan.chartArea.bottom);
+    expect(chartAt.col).toBe(plan.chartArea.left);
+    expect(parseA1(plan.chart.anchor!)!.row).toBeGreaterThanOrEqual(plan.extent.rows);
   });
 
   it('lays out as a rectangle the writers can write in one block', () => {
