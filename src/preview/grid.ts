@@ -187,10 +187,11 @@ export class Grid {
     // The sheet: a scrolled canvas as large as the area; headings stick to its edges.
     this.scroller = el(d, 'div', 'pv-scroll');
     this.scroller.tabIndex = 0;
-    this.scroller.setAttribute('role', 'grid');
-    this.scroller.setAttribute('aria-label', 'Sheet');
-    this.scroller.setAttribute('aria-rowcount', String(MAX_ROWS));
-    this.scroller.setAttribute('aria-colcount', String(MAX_COLUMNS));
+    // Only the cells in view exist, placed by position rather than in rows, so they carry no
+    // grid roles; the name box, the formula bar and the status line (read aloud) say where
+    // the selection is and what the cell holds.
+    this.scroller.setAttribute('role', 'region');
+    this.scroller.setAttribute('aria-label', 'Sheet: arrow keys move, type to enter, F2 edits');
     this.canvas = el(d, 'div', 'pv-canvas');
     this.colHeadStrip = el(d, 'div', 'pv-colheads');
     const corner = el(d, 'div', 'pv-corner');
@@ -302,6 +303,7 @@ export class Grid {
     this.renderTabs();
     this.scroller.scrollTo(0, 0);
     this.refresh();
+    for (const l of this.selectionListeners) l();
   }
 
   select(pos: CellPos, extend = false): void {
@@ -513,12 +515,9 @@ export class Grid {
         if (!cell) {
           cell = this.pool.pop() ?? (el(d, 'div') as CellEl);
           cell.painted = undefined;
-          cell.setAttribute('role', 'gridcell');
           cell.dataset.cell = a1({ row: r, col: c });
           cell.dataset.row = String(r);
           cell.dataset.col = String(c);
-          cell.setAttribute('aria-rowindex', String(r + 1));
-          cell.setAttribute('aria-colindex', String(c + 1));
           this.rendered.set(key, cell);
           fresh.push(cell);
         }
@@ -551,7 +550,6 @@ export class Grid {
       if (!head) {
         head = el(d, 'div', 'pv-colhead', columnName(c));
         head.dataset.col = String(c);
-        head.setAttribute('role', 'columnheader');
         head.append(el(d, 'span', 'pv-resize'));
         this.colHeads.set(c, head);
         this.colHeadStrip.append(head);
@@ -571,7 +569,6 @@ export class Grid {
       if (!head) {
         head = el(d, 'div', 'pv-rowhead', String(r + 1));
         head.dataset.row = String(r);
-        head.setAttribute('role', 'rowheader');
         head.style.top = `${r * ROW_PX}px`;
         this.rowHeads.set(r, head);
         this.rowHeadStrip.append(head);
@@ -681,9 +678,6 @@ export class Grid {
       list.toggle('cp-b', copied && r === k!.bottom);
       list.toggle('cp-l', copied && c === k!.left);
       list.toggle('cp-r', copied && c === k!.right);
-      if (active) cell.setAttribute('aria-selected', 'true');
-      else if (inSel) cell.setAttribute('aria-selected', 'true');
-      else cell.removeAttribute('aria-selected');
     }
     for (const [c, head] of this.colHeads) head.classList.toggle('hl', c >= sel.left && c <= sel.right);
     for (const [r, head] of this.rowHeads) head.classList.toggle('hl', r >= sel.top && r <= sel.bottom);

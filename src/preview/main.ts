@@ -8,6 +8,7 @@ import chartCss from './chart-overlay.css?raw';
 import { workbookMessages as M } from '../core/messages';
 import { specs } from '../functions';
 import { mountPane } from '../taskpane/pane';
+import { a1, parseA1 } from './address';
 import { loadDemo, DEMO_SHEET } from './demo';
 import { PhzEngine } from './engine';
 import { Grid } from './grid';
@@ -44,6 +45,26 @@ function button(doc: Document, text: string, title: string): HTMLButtonElement {
   b.textContent = text;
   b.title = title;
   return b;
+}
+
+const VIEW_KEY = 'starpoint-preview-view';
+
+/** The sheet and cell shown last, so a reload comes back to them (as a spreadsheet reopens where it was). */
+function readView(): { sheet: string; cell: string } | undefined {
+  try {
+    const v = JSON.parse(localStorageOrUndefined()?.getItem(VIEW_KEY) ?? 'null') as { sheet?: unknown; cell?: unknown } | null;
+    return typeof v?.sheet === 'string' && typeof v.cell === 'string' ? { sheet: v.sheet, cell: v.cell } : undefined;
+  } catch {
+    return undefined;
+  }
+}
+
+function saveView(grid: Grid): void {
+  try {
+    localStorageOrUndefined()?.setItem(VIEW_KEY, JSON.stringify({ sheet: grid.sheetName, cell: a1(grid.activeCell) }));
+  } catch {
+    // not kept: the workbook still is
+  }
 }
 
 function localStorageOrUndefined(): Storage | undefined {
@@ -85,10 +106,16 @@ async function start(): Promise<void> {
   const grid = new Grid(bookRoot, workbook);
   const charts = new ChartOverlay(grid, workbook);
   mountPane(paneRoot, new PreviewPort(grid, workbook, new PreviewPlotPort(grid, workbook, charts)));
-  if (workbook.sheetNames().includes(DEMO_SHEET) && !restored) {
+  const view = restored ? readView() : undefined;
+  if (view && workbook.sheetNames().includes(view.sheet)) {
+    grid.showSheet(view.sheet);
+    const at = parseA1(view.cell);
+    if (at) grid.select(at);
+  } else if (workbook.sheetNames().includes(DEMO_SHEET) && !restored) {
     grid.showSheet(DEMO_SHEET);
     grid.select({ row: 5, col: 1 });
   }
+  grid.onSelectionChange(() => saveView(grid));
   addWorkbookActions(grid, workbook, keeper, () => theDemo().doc);
   keeper.start();
   // a hidden page may never come back (tab closed, browser quit): write the copy now
