@@ -9,6 +9,7 @@ import type { FunctionSpec } from '../functions/spec';
 import type { WorkbookPort } from './port';
 import { buildReference, countEntries, type ReferenceEntry, type ReferenceExample } from './reference';
 import { paneParts, type PanePart, type PartHandle } from './parts';
+import { builder, ensureStyle } from './dom';
 
 const STYLE_ID = 'starpoint-pane-style';
 
@@ -32,42 +33,13 @@ export interface PaneOptions {
 
 let mountCount = 0;
 
-type Child = Node | string | null | undefined | false;
-
-/** Tiny element builder bound to the root's document (no global `document`). */
-function builder(doc: Document) {
-  return function h<K extends keyof HTMLElementTagNameMap>(
-    tag: K,
-    props: { className?: string; text?: string; attrs?: Record<string, string> } = {},
-    ...children: Child[]
-  ): HTMLElementTagNameMap[K] {
-    const el = doc.createElement(tag);
-    if (props.className) el.className = props.className;
-    if (props.text !== undefined) el.textContent = props.text;
-    for (const [k, v] of Object.entries(props.attrs ?? {})) el.setAttribute(k, v);
-    for (const c of children) {
-      if (c === null || c === undefined || c === false) continue;
-      el.append(c);
-    }
-    return el;
-  };
-}
-
-function ensureStyle(doc: Document): void {
-  if (doc.getElementById(STYLE_ID)) return;
-  const style = doc.createElement('style');
-  style.id = STYLE_ID;
-  style.textContent = paneCss;
-  doc.head.append(style);
-}
-
 /** Mounts the pane into `root` (replacing its content). `port` null: reference only. */
 export function mountPane(root: HTMLElement, port: WorkbookPort | null, options: PaneOptions = {}): PaneHandle {
   const doc = root.ownerDocument;
   const h = builder(doc);
   const specs = options.specs ?? registrySpecs;
   const id = `sp${++mountCount}`;
-  ensureStyle(doc);
+  ensureStyle(doc, STYLE_ID, paneCss);
 
   const searchInput = h('input', {
     className: 'sp-search',

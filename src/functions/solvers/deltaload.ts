@@ -1,9 +1,7 @@
 import { formatPolar } from '../../core/format';
 import { solveDelta } from '../../core/threephase';
 import { defineFunction, type HostResult } from '../spec';
-import { readBoolean, readDigits } from '../readers';
-import { DIGITS, phasorParam } from '../params';
-import { readImpedanceSet, readLineImpedances, readTriple } from '../sets/_threephase';
+import { DELTA_PARAMS, labelled, readDeltaArgs } from './_networks';
 
 const HEADER = ['', 'line current', 'branch current', 'branch voltage', 'branch power'];
 const ROW_LABELS = ['line 1, branch 12', 'line 2, branch 23', 'line 3, branch 31'];
@@ -25,13 +23,7 @@ export const DELTALOAD = defineFunction({
     'impedance, and its complex power V·I*. Line voltages physically sum to zero: a residual V12 + V23 + V31 up to 1 % ' +
     'of their mean magnitude (rounded or metered values) is removed by taking a third of it from each (dropping the ' +
     'zero-sequence part, which line voltages cannot have); a larger one is an error. For magnitudes only, use LINESET.',
-  params: [
-    phasorParam('line_voltages', 'Line-to-line voltages V12, V23, V31 (three)'),
-    { name: 'impedances', type: 'matrix', description: 'Branch impedances Z12, Z23, Z31 (three, or one for all); "open" for a missing branch.' },
-    { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },
-    { name: 'labels', type: 'scalar', optional: true, description: 'TRUE adds a header row and a label column (default FALSE).' },
-    DIGITS,
-  ],
+  params: DELTA_PARAMS,
   result: 'A 3×4 table of polar text (4×5 with labels): row k [I_k, I_k(k+1), V_branch, S_branch].',
   errors: [
     'Other than three line voltages, other than one or three impedances, or line voltages whose sum is more than 1 % of their mean magnitude give #VALUE!.',
@@ -49,15 +41,10 @@ export const DELTALOAD = defineFunction({
     },
   ],
   implementation: (lineVoltages, impedances, line, labels, digits) => {
-    const d = readDigits(digits);
-    const v = readTriple(lineVoltages, 'line_voltages', 'line voltages V12, V23, V31', 'voltage');
-    const loads = readImpedanceSet(impedances, 'impedances', true, 'branch impedance');
-    const lines = readLineImpedances(line);
-    const withLabels = readBoolean(labels, 'labels', false);
-    const s = solveDelta({ lineVoltages: v, loads, lines });
-    const f = (z: Parameters<typeof formatPolar>[0]): string => formatPolar(z, d);
+    const a = readDeltaArgs(lineVoltages, impedances, line, labels, digits);
+    const s = solveDelta(a);
+    const f = (z: Parameters<typeof formatPolar>[0]): string => formatPolar(z, a.digits);
     const table: HostResult = [0, 1, 2].map((k) => [f(s.lineCurrents[k]), f(s.branchCurrents[k]), f(s.branchVoltages[k]), f(s.branchPowers[k])]);
-    if (!withLabels) return table;
-    return [HEADER.slice(), ...table.map((row, i) => [ROW_LABELS[i], ...row])];
+    return labelled(table, a, HEADER, ROW_LABELS);
   },
 });

@@ -1,10 +1,7 @@
-import { formatPolar } from '../../core/format';
 import { closeLineSet, deltaExtras, solveDelta, starOfClosedLineSet } from '../../core/threephase';
-import { defineFunction, type HostResult } from '../spec';
-import { readBoolean, readDigits } from '../readers';
-import { DIGITS, phasorParam } from '../params';
+import { defineFunction } from '../spec';
 import { SIZING_CAUTIONS } from '../neutral/_cautions';
-import { readImpedanceSet, readLineImpedances, readTriple } from '../sets/_threephase';
+import { DELTA_PARAMS, extrasTable, labelled, readDeltaArgs } from './_networks';
 
 const HEADER = ['', 'loss (VA)', 'source power (VA)', 'drop at branch (%)'];
 const ROW_LABELS = ['line 1, branch 12', 'line 2, branch 23', 'line 3, branch 31', 'no neutral (0); total source power; largest drop'];
@@ -23,13 +20,7 @@ export const DELTALOSSES = defineFunction({
     'depends on that reference, as wattmeter readings do on their common point. Row 4: 0 (a delta has no neutral, so PHZ.ADD of the ' +
     'first column is the total loss, as for STARLOSSES), the total source power, and the largest of the three drops. Power balance: total ' +
     'source power = the sum of DELTALOAD’s branch powers + the line losses.',
-  params: [
-    phasorParam('line_voltages', 'Line-to-line voltages V12, V23, V31 (three)'),
-    { name: 'impedances', type: 'matrix', description: 'Branch impedances Z12, Z23, Z31 (three, or one for all); "open" for a missing branch.' },
-    { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },
-    { name: 'labels', type: 'scalar', optional: true, description: 'TRUE adds a header row and a label column (default FALSE).' },
-    DIGITS,
-  ],
+  params: DELTA_PARAMS,
   result: 'A 4×3 table (5×4 with labels): rows 1–3 [line loss, source power (polar text), drop at the branch %]; row 4 [0, total source power, largest drop %].',
   errors: ['As PHZ.DELTALOAD; and a 0 V line voltage (the drop in percent needs it) gives #VALUE!.'],
   cautions: [
@@ -43,19 +34,10 @@ export const DELTALOSSES = defineFunction({
     },
   ],
   implementation: (lineVoltages, impedances, line, labels, digits) => {
-    const d = readDigits(digits);
-    const v = readTriple(lineVoltages, 'line_voltages', 'line voltages V12, V23, V31', 'voltage');
-    const loads = readImpedanceSet(impedances, 'impedances', true, 'branch impedance');
-    const lines = readLineImpedances(line);
-    const withLabels = readBoolean(labels, 'labels', false);
-    const s = solveDelta({ lineVoltages: v, loads, lines });
-    const closed = closeLineSet(v, 'line_voltages');
-    const x = deltaExtras(closed, starOfClosedLineSet(closed), lines, s);
-    const f = (z: Parameters<typeof formatPolar>[0]): string => formatPolar(z, d);
-    const num = (n: number): number => (n === 0 ? 0 : n);
-    const table: HostResult = [0, 1, 2].map((k) => [f(x.lineLosses[k]), f(x.sourcePowers[k]), num(x.dropPct[k])]);
-    table.push([f(x.neutralLoss), f(x.sourcePower), num(x.maxDropPct)]);
-    if (!withLabels) return table;
-    return [HEADER.slice(), ...table.map((row, i) => [ROW_LABELS[i], ...row])];
+    const a = readDeltaArgs(lineVoltages, impedances, line, labels, digits);
+    const s = solveDelta(a);
+    const closed = closeLineSet(a.lineVoltages, 'line_voltages');
+    const x = deltaExtras(closed, starOfClosedLineSet(closed), a.lines, s);
+    return labelled(extrasTable(x, a.digits), a, HEADER, ROW_LABELS);
   },
 });

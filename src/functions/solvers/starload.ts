@@ -1,10 +1,7 @@
 import { formatPolar } from '../../core/format';
 import { solveStar } from '../../core/threephase';
 import { defineFunction, type HostResult } from '../spec';
-import { readBoolean, readDigits } from '../readers';
-import { DIGITS, phasorParam } from '../params';
-import { readImpedanceSet, readLineImpedances, readNeutral, readTriple } from '../sets/_threephase';
-import { ZERO } from '../../core/phasor';
+import { STAR_PARAMS, labelled, readStarArgs } from './_networks';
 
 const HEADER = ['', 'current', 'voltage', 'complex power'];
 const ROW_LABELS = ['phase 1', 'phase 2', 'phase 3', "neutral: I_N, V_N'N, total S"];
@@ -25,14 +22,7 @@ export const STARLOAD = defineFunction({
     'complex power V·I*. Row 4: neutral current from the load star point to the source neutral (= I1 + I2 + I3), the ' +
     'star-point shift V_N′N, and the total load complex power (line and neutral losses excluded). Units are whatever ' +
     'you give consistently (V and Ω give A and VA). Conventions: phase 2 lags phase 1 by 120° in positive sequence.',
-  params: [
-    phasorParam('phase_voltages', 'Source phase voltages E1, E2, E3 (three)'),
-    { name: 'impedances', type: 'matrix', description: 'Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.' },
-    { name: 'neutral', type: 'matrix', optional: true, description: 'Left out or 0 = solid neutral; an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral. Not a blank cell.' },
-    { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },
-    { name: 'labels', type: 'scalar', optional: true, description: 'TRUE adds a header row and a label column (default FALSE).' },
-    DIGITS,
-  ],
+  params: STAR_PARAMS,
   result: 'A 4×3 table of polar text (5×4 with labels): rows phases 1–3 [I, V_load, S]; row 4 [I_N, V_N′N, total S].',
   errors: [
     'Other than three phase voltages, or other than one or three impedances, gives #VALUE!.',
@@ -61,20 +51,15 @@ export const STARLOAD = defineFunction({
     },
   ],
   implementation: (phaseVoltages, impedances, neutral, line, labels, digits) => {
-    const d = readDigits(digits);
-    const sources = readTriple(phaseVoltages, 'phase_voltages', 'source phase voltages E1, E2, E3', 'voltage');
-    const loads = readImpedanceSet(impedances, 'impedances', true, 'load impedance');
-    const lines = readLineImpedances(line) ?? [ZERO, ZERO, ZERO];
-    const withLabels = readBoolean(labels, 'labels', false);
-    const s = solveStar({ sources, loads, lines, neutral: readNeutral(neutral) });
-    const f = (z: Parameters<typeof formatPolar>[0]): string => formatPolar(z, d);
+    const a = readStarArgs(phaseVoltages, impedances, neutral, line, labels, digits);
+    const s = solveStar(a);
+    const f = (z: Parameters<typeof formatPolar>[0]): string => formatPolar(z, a.digits);
     const table: HostResult = [
       [f(s.currents[0]), f(s.loadVoltages[0]), f(s.loadPowers[0])],
       [f(s.currents[1]), f(s.loadVoltages[1]), f(s.loadPowers[1])],
       [f(s.currents[2]), f(s.loadVoltages[2]), f(s.loadPowers[2])],
       [f(s.neutralCurrent), f(s.shift), f(s.totalLoadPower)],
     ];
-    if (!withLabels) return table;
-    return [HEADER.slice(), ...table.map((row, i) => [ROW_LABELS[i], ...row])];
+    return labelled(table, a, HEADER, ROW_LABELS);
   },
 });

@@ -1,11 +1,7 @@
-import { formatPolar } from '../../core/format';
 import { solveStar, starExtras } from '../../core/threephase';
-import { ZERO } from '../../core/phasor';
-import { defineFunction, type HostResult } from '../spec';
-import { readBoolean, readDigits } from '../readers';
-import { DIGITS, phasorParam } from '../params';
+import { defineFunction } from '../spec';
 import { SIZING_CAUTIONS } from '../neutral/_cautions';
-import { readImpedanceSet, readLineImpedances, readNeutral, readTriple } from '../sets/_threephase';
+import { STAR_PARAMS, extrasTable, labelled, readStarArgs } from './_networks';
 
 const HEADER = ['', 'loss (VA)', 'source power (VA)', 'drop at load (%)'];
 const ROW_LABELS = ['line 1', 'line 2', 'line 3', 'neutral loss; total source power; largest drop'];
@@ -23,14 +19,7 @@ export const STARLOSSES = defineFunction({
     'in the neutral impedance |I_N|²·Z_N (0 for a solid or open neutral), the total source power Σ E_k·I_k*, and the largest of the ' +
     'three drops. Power balance: total source power = STARLOAD’s total load power + the first column’s sum (line and neutral losses), ' +
     'so PHZ.ADD of the first column is the total loss. Units as for STARLOAD (V and Ω give VA).',
-  params: [
-    phasorParam('phase_voltages', 'Source phase voltages E1, E2, E3 (three)'),
-    { name: 'impedances', type: 'matrix', description: 'Load impedances Z1, Z2, Z3 (three values, or one for all); "open" for a disconnected phase.' },
-    { name: 'neutral', type: 'matrix', optional: true, description: 'Left out or 0 = solid neutral; an impedance (e.g. 0.5+j0.2) = impedant neutral; "open" = no neutral. Not a blank cell.' },
-    { name: 'line', type: 'matrix', optional: true, description: 'Line impedance: one for every line, or three (default none).' },
-    { name: 'labels', type: 'scalar', optional: true, description: 'TRUE adds a header row and a label column (default FALSE).' },
-    DIGITS,
-  ],
+  params: STAR_PARAMS,
   result: 'A 4×3 table (5×4 with labels): rows lines 1–3 [line loss, source power (polar text), drop at the load %]; row 4 [neutral loss, total source power, largest drop %].',
   errors: ['As PHZ.STARLOAD; and a 0 V source phase (the drop in percent needs its voltage) gives #VALUE!.'],
   cautions: [
@@ -44,19 +33,8 @@ export const STARLOSSES = defineFunction({
     },
   ],
   implementation: (phaseVoltages, impedances, neutral, line, labels, digits) => {
-    const d = readDigits(digits);
-    const sources = readTriple(phaseVoltages, 'phase_voltages', 'source phase voltages E1, E2, E3', 'voltage');
-    const loads = readImpedanceSet(impedances, 'impedances', true, 'load impedance');
-    const lines = readLineImpedances(line) ?? [ZERO, ZERO, ZERO];
-    const n = readNeutral(neutral);
-    const withLabels = readBoolean(labels, 'labels', false);
-    const s = solveStar({ sources, loads, lines, neutral: n });
-    const x = starExtras(sources, lines, n, s);
-    const f = (z: Parameters<typeof formatPolar>[0]): string => formatPolar(z, d);
-    const num = (v: number): number => (v === 0 ? 0 : v);
-    const table: HostResult = [0, 1, 2].map((k) => [f(x.lineLosses[k]), f(x.sourcePowers[k]), num(x.dropPct[k])]);
-    table.push([f(x.neutralLoss), f(x.sourcePower), num(x.maxDropPct)]);
-    if (!withLabels) return table;
-    return [HEADER.slice(), ...table.map((row, i) => [ROW_LABELS[i], ...row])];
+    const a = readStarArgs(phaseVoltages, impedances, neutral, line, labels, digits);
+    const x = starExtras(a.sources, a.lines, a.neutral, solveStar(a));
+    return labelled(extrasTable(x, a.digits), a, HEADER, ROW_LABELS);
   },
 });

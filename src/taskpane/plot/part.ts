@@ -18,32 +18,12 @@ import { markerPath, renderSvg } from './svg';
 import { phasorStyle, type PaletteName } from './palette';
 import { PLOT_LIMITS, readSelection } from './read';
 import { shortNumber } from './scale';
+import { builder, ensureStyle, errorText } from '../dom';
 
 const STYLE_ID = 'starpoint-plot-style';
 /** Phasors ticked for tip to tail when a new block is selected (the first group, up to this many). */
 const DEFAULT_CHAIN = 12;
 let mounts = 0;
-
-type Child = Node | string | null | undefined | false;
-
-function builder(doc: Document) {
-  return function h<K extends keyof HTMLElementTagNameMap>(
-    tag: K,
-    props: { className?: string; text?: string; attrs?: Record<string, string> } = {},
-    ...children: Child[]
-  ): HTMLElementTagNameMap[K] {
-    const el = doc.createElement(tag);
-    if (props.className) el.className = props.className;
-    if (props.text !== undefined) el.textContent = props.text;
-    for (const [k, v] of Object.entries(props.attrs ?? {})) el.setAttribute(k, v);
-    for (const c of children) if (c !== null && c !== undefined && c !== false) el.append(c);
-    return el;
-  };
-}
-
-function message(e: unknown): string {
-  return e instanceof Error ? e.message : String(e);
-}
 
 /** The chart request for what is plotted: one entry per phasor, grouped as on the plot. */
 export function chartRequestOf(data: PlotData): PhasorChartRequest {
@@ -60,12 +40,7 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   const doc = panel.ownerDocument;
   const h = builder(doc);
   const id = `spp${++mounts}`;
-  if (!doc.getElementById(STYLE_ID)) {
-    const style = doc.createElement('style');
-    style.id = STYLE_ID;
-    style.textContent = plotCss;
-    doc.head.append(style);
-  }
+  ensureStyle(doc, STYLE_ID, plotCss);
   if (!port) {
     panel.replaceChildren(h('p', { className: 'sp-note', text: M.noWorkbook }));
     return {};
@@ -267,7 +242,7 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
     try {
       block = await port!.readSelection(PLOT_LIMITS.maxCells, pinned);
     } catch (e) {
-      clearPlot(M.readFailed(port!.hostName, message(e)));
+      clearPlot(M.readFailed(port!.hostName, errorText(e)));
       return;
     }
     const source = `${block.sheet}!${block.selected}`;
@@ -330,7 +305,7 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
         actionStatus.textContent = `Saved ${name}.`;
       })
       .catch((e: unknown) => {
-        actionStatus.textContent = `Could not make the PNG: ${message(e)}.`;
+        actionStatus.textContent = `Could not make the PNG: ${errorText(e)}.`;
       });
   });
   chartButton.addEventListener('click', () => {
@@ -347,7 +322,7 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
         actionStatus.textContent = `Inserted ${r.chartName}, linked to the plotted cells through the helper cells ${r.helperRange}.`;
       })
       .catch((e: unknown) => {
-        actionStatus.textContent = `Could not insert the chart: ${message(e)}`;
+        actionStatus.textContent = `Could not insert the chart: ${errorText(e)}`;
       })
       .finally(() => {
         chartButton.disabled = support.chart !== null || !data;
@@ -371,7 +346,7 @@ function mountPlot(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
       }
       stop = off;
     } catch (e) {
-      status.textContent = `The plot cannot follow the selection: ${message(e)}. Use Refresh.`;
+      status.textContent = `The plot cannot follow the selection: ${errorText(e)}. Use Refresh.`;
     }
     await refresh();
   }

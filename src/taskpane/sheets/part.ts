@@ -11,6 +11,7 @@ import type { Calculation, FieldSpec, FieldValue } from './calculation';
 import { readField } from './calculation';
 import { calculationById, calculations } from './calculations';
 import { cellA1 } from './plan';
+import { ensureStyle, errorText } from '../dom';
 
 const STYLE_ID = 'starpoint-sheets-style';
 /** "Read from selection" reads at most this many cells: more than any calculation has fields. */
@@ -22,20 +23,11 @@ export function today(d = new Date()): string {
   return `${d.getFullYear()}-${two(d.getMonth() + 1)}-${two(d.getDate())}`;
 }
 
-function message(e: unknown): string {
-  return e instanceof Error ? e.message : String(e);
-}
-
 let mounts = 0;
 
 function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
   const doc = panel.ownerDocument;
-  if (!doc.getElementById(STYLE_ID)) {
-    const style = doc.createElement('style');
-    style.id = STYLE_ID;
-    style.textContent = partCss;
-    doc.head.append(style);
-  }
+  ensureStyle(doc, STYLE_ID, partCss);
   const id = `sps${++mounts}`;
   const el = <K extends keyof HTMLElementTagNameMap>(tag: K, className = '', text?: string): HTMLElementTagNameMap[K] => {
     const e = doc.createElement(tag);
@@ -119,7 +111,7 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
       input.removeAttribute('aria-invalid');
       return v;
     } catch (e) {
-      error.textContent = message(e);
+      error.textContent = errorText(e);
       input.setAttribute('aria-invalid', 'true');
       return undefined;
     }
@@ -143,7 +135,7 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
       try {
         calc.crossCheck(values);
       } catch (e) {
-        caseProblem.textContent = `These inputs have no solution: ${message(e)}`;
+        caseProblem.textContent = `These inputs have no solution: ${errorText(e)}`;
         ok = false;
       }
     }
@@ -222,7 +214,7 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
         (left > 0 ? ` ${left} value${left === 1 ? ' was' : 's were'} left over: there are no more fields.` : '') +
         ' Click a field first to start filling there.';
     } catch (e) {
-      status.textContent = `Could not read the selection: ${message(e)}`;
+      status.textContent = `Could not read the selection: ${errorText(e)}`;
     }
   }
 
@@ -244,14 +236,14 @@ function mount(panel: HTMLElement, port: WorkbookPort | null): PartHandle {
           const chart = await port.insertPhasorChart({ ...plan.chart, sheet: result.sheet });
           chartText = `Inserted the linked chart “${chart.chartName}”; its helper cells are ${chart.helperRange}.`;
         } catch (e) {
-          chartText = `The phasor chart could not be inserted (${message(e)}); its place is kept at ${cellA1(plan.chartArea.top, plan.chartArea.left)}.`;
+          chartText = `The phasor chart could not be inserted (${errorText(e)}); its place is kept at ${cellA1(plan.chartArea.top, plan.chartArea.left)}.`;
         }
       }
       status.textContent =
         `Wrote the new sheet “${result.sheet}” (now active): ${plan.inputs.length} inputs, ${plan.steps.length} steps, ${plan.checks.length} checks; ` +
         `${result.cells} cells and ${result.names} names scoped to the sheet. ${chartText}`;
     } catch (e) {
-      status.textContent = `Nothing was written: ${message(e)}`;
+      status.textContent = `Nothing was written: ${errorText(e)}`;
     } finally {
       busy = false;
       refresh();
