@@ -185,7 +185,7 @@ module.exports = (env, argv) => {
       new DeclarationsAreFresh(),
       new CustomFunctionsMetadataPlugin({ input: './src/functions/excel/declarations.ts', output: 'functions.json' }),
       new WarnOnEmptyMetadata(),
-      new KeepPackagesOutOfEntry('taskpane', ['hyperformula']),
+      new KeepPackagesOutOfEntry('taskpane', ['hyperformula', 'exceljs', 'idb-keyval']),
       ...pages,
       new CopyWebpackPlugin({
         patterns: [

@@ -5,6 +5,8 @@
  * Worked sheets (issue 9): the largest sheet planned ≤ 1 ms and written into the preview
  * ≤ 250 ms (our own targets: the pane should answer at once). Panel schedules (issue 11):
  * PHZ.SCHEDULE on 500 ways ≤ 1 ms per call (our own target: a schedule recalculates at once).
+ * The preview workbook (issue 12, bench/workbook.bench.ts): paste, recalculation, undo and
+ * reload of 40,000 rows of PHZ.DIV, each ≤ 1 s.
  *
  * The DIV figures come twice: on one constant input (whose angle hits the exact 15°
  * tables) and over 256 distinct realistic inputs (bench/inputs.ts: decimals, angles that
@@ -25,6 +27,7 @@ import { benchPlot1000, benchReplot50 } from './plot.bench';
 import { benchPlan, benchWrite, largest } from './sheets.bench';
 import { benchSchedule } from './schedule.bench';
 import { divCases } from './inputs';
+import { PASTE_ROWS, workbookCases } from './workbook.bench';
 import { PhzEngine } from '../src/preview/engine';
 
 let sink = 0;
@@ -115,6 +118,7 @@ const CASES: Record<string, () => Promise<number> | number> = {
   schedule500: () => benchSchedule(500),
   sheetPlan: () => benchPlan(),
   sheetWrite: () => benchWrite(),
+  ...workbookCases,
 };
 
 function measure(name: string): number {
@@ -178,6 +182,18 @@ async function main(): Promise<void> {
   row(`Worked sheet: plan "${big.calc.name}" (${big.cells} cells)`, `${plan.toFixed(0)} µs`, plan <= 1000 ? 'met (≤ 1 ms)' : 'NOT MET (≤ 1 ms)');
   const write = measure('sheetWrite');
   row(`Worked sheet: write it into the preview (engine evaluates all)`, `${write.toFixed(1)} ms`, write <= 250 ? 'met (≤ 250 ms)' : 'NOT MET (≤ 250 ms)');
+  const rows = PASTE_ROWS.toLocaleString('en-US');
+  for (const [name, label] of [
+    ['wbPaste', `Preview workbook: paste ${rows} rows × 3 columns, a PHZ.DIV per row`],
+    ['wbEdit', `Preview workbook: edit the common input, ${rows} PHZ.DIV recalculate`],
+    ['wbUndoEdit', 'Preview workbook: undo of that edit'],
+    ['wbUndoPaste', `Preview workbook: undo of the ${rows}-row paste (one block)`],
+    ['wbSaveCopy', `Preview workbook: the whole workbook as a document (the browser copy)`],
+    ['wbReload', `Preview workbook: reload it from that copy (engine rebuilt)`],
+  ] as const) {
+    const t = measure(name);
+    row(label, `${t.toFixed(0)} ms`, t <= 1000 ? 'met (≤ 1 s)' : 'NOT MET (≤ 1 s)');
+  }
 }
 
 void main();

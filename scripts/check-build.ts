@@ -1,7 +1,7 @@
 /**
  * After `npm run build`: the built dist/functions.json lists every registry entry, in
  * order, with matrix phasor parameters and matrix results; the production add-in bundle
- * holds no HyperFormula; taskpane.html loads office.js from where its build mode says, with
+ * holds no HyperFormula, ExcelJS or idb-keyval; taskpane.html loads office.js from where its build mode says, with
  * the matching Content-Security-Policy; and the built bundle, loaded beside Excel's own
  * custom-functions runtime and called through it with host messages shaped by
  * dist/functions.json, gives every documented example (test/host/). Run by .ci/run; exits
@@ -53,7 +53,10 @@ for (const s of specs) {
   });
 }
 for (const file of readdirSync(dist).filter((f) => /^taskpane.*\.js$/.test(f))) {
-  if (/HyperFormula|hyperformula/.test(readFileSync(join(dist, file), 'utf8'))) problems.push(`${file} contains HyperFormula`);
+  const text = readFileSync(join(dist, file), 'utf8');
+  if (/HyperFormula|hyperformula/.test(text)) problems.push(`${file} contains HyperFormula`);
+  // the preview's file and storage libraries (ExcelJS, idb-keyval) stay out of the add-in too
+  if (/ExcelJS|exceljs|keyval-store/.test(text)) problems.push(`${file} contains the preview's ExcelJS or idb-keyval`);
 }
 // The add-in's page: office.js from the CDN with a policy allowing exactly that origin and
 // no local copy (production), or the local copy with a policy of this origin only (development).
@@ -104,7 +107,7 @@ void examplesThroughBundle().then((count) => {
     process.exit(1);
   }
   console.log(
-    `dist check: functions.json lists all ${names.length} registry functions with matrix parameters; no HyperFormula in the add-in bundle; ` +
+    `dist check: functions.json lists all ${names.length} registry functions with matrix parameters; no HyperFormula, ExcelJS or idb-keyval in the add-in bundle; ` +
       `all ${count} documented examples give their results through Excel's custom-functions runtime and the built bundle; ${mode}`,
   );
   process.exit(0);

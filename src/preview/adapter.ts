@@ -87,6 +87,36 @@ export function spillingFormulas(hf: HyperFormula): SimpleCellAddress[] {
 /** Outcome of one call: the host's 2-D result or an engine error carrying our message. */
 type Outcome = HostResult | CellError;
 
+/**
+ * The engine asks a formula's spill size (`phzSize`) when the formula is entered, and then
+ * evaluates it (`phzCall`): two calls of the implementation for one result. The first
+ * outcome is kept here, by cell, with a key of the arguments it was computed from; the
+ * evaluation that follows uses it when the arguments are the same (registry functions are
+ * pure). Only calls with a few argument cells are kept, so building the key stays cheap.
+ */
+const sizedOutcomes: WeakMap<object, Map<string, { readonly key: string; readonly outcome: Outcome }>> = new WeakMap();
+const KEY_CELLS = 16;
+const KEPT_OUTCOMES = 200_000;
+
+/** A key of the host arguments, or `undefined` when they hold too many cells to be worth one. */
+function argumentsKey(id: string, args: readonly unknown[]): string | undefined {
+  let key = id;
+  let cells = 0;
+  const add = (v: unknown): boolean => {
+    if (Array.isArray(v)) {
+      key += '[';
+      for (const x of v) if (!add(x)) return false;
+      key += ']';
+      return true;
+    }
+    if (++cells > KEY_CELLS) return false;
+    key += v === null || v === undefined ? '\u0001' : `\u0002${typeof v}:${String(v)}`;
+    return true;
+  };
+  for (const a of args) if (!add(a)) return undefined;
+  return key;
+}
+
 function ordinal(n: number): string {
   const s = n % 100 >= 11 && n % 100 <= 13 ? 'th' : (['th', 'st', 'nd', 'rd'][n % 10] ?? 'th');
   return `${n}${s}`;
@@ -171,8 +201,11 @@ export function createPhzPlugin(registry: Registry): typeof FunctionPlugin & { i
   class PhzPlugin extends FunctionPlugin {
     static override implementedFunctions = implemented;
 
-    /** Evaluates the arguments and runs the implementation; never throws. */
-    private callRegistry(ast: AstNode, state: EvalState): Outcome {
+    /**
+     * Evaluates the arguments and runs the implementation; never throws. `phase` says who
+     * asks: the size query keeps its outcome for the evaluation that follows (see `sizedOutcomes`).
+     */
+    private callRegistry(ast: AstNode, state: EvalState, phase: 'size' | 'call'): Outcome {
       const id = (ast.procedureName ?? '').toUpperCase();
       const entry = byId.get(id);
       if (!entry) return new CellError(ErrorType.NAME, `${id} is not in the PHZ registry.`);
@@ -241,6 +274,28 @@ export function createPhzPlugin(registry: Registry): typeof FunctionPlugin & { i
         hostArgs.push(value);
       }
 
+      const graph = this.dependencyGraph as object;
+      const at = state.formulaAddress;
+      const cellKey = `${at.sheet}:${at.row}:${at.col}`;
+      const argsKey = argumentsKey(id, hostArgs);
+      let kept = sizedOutcomes.get(graph);
+      if (phase === 'call' && kept) {
+        const before = kept.get(cellKey);
+        if (before) {
+          kept.delete(cellKey);
+          if (argsKey !== undefined && before.key === argsKey) return before.outcome;
+        }
+      }
+      const outcome = this.runImplementation(id, spec, impl, hostArgs);
+      if (phase === 'size' && argsKey !== undefined) {
+        if (!kept) sizedOutcomes.set(graph, (kept = new Map()));
+        if (kept.size >= KEPT_OUTCOMES) kept.clear();
+        kept.set(cellKey, { key: argsKey, outcome });
+      }
+      return outcome;
+    }
+
+    private runImplementation(id: string, spec: FunctionSpec, impl: (...args: any[]) => HostResult, hostArgs: unknown[]): Outcome {
       try {
         const result = impl(...hostArgs);
         if (!Array.isArray(result) || result.length === 0 || !result.every((r) => Array.isArray(r))) {
@@ -257,7 +312,7 @@ export function createPhzPlugin(registry: Registry): typeof FunctionPlugin & { i
 
     /** Evaluation: the result itself; a 2-D result spills. */
     phzCall(ast: AstNode, state: EvalState): unknown {
-      const outcome = this.callRegistry(ast, state);
+      const outcome = this.callRegistry(ast, state, 'call');
       const vertex = state.formulaVertex;
       // The engine reserves the spill area when the formula is entered and cannot take
       // a larger result later. When inputs change the natural size (e.g. a range
@@ -283,7 +338,7 @@ export function createPhzPlugin(registry: Registry): typeof FunctionPlugin & { i
      */
     phzSize(ast: AstNode, state: EvalState): ArraySize {
       try {
-        const outcome = this.callRegistry(ast, state);
+        const outcome = this.callRegistry(ast, state, 'size');
         if (outcome instanceof CellError) return ArraySize.scalar();
         const { width, height } = resultSize(outcome);
         if (width * height > 1) noteAddress(spillers, this.dependencyGraph as object, state.formulaAddress);

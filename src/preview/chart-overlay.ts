@@ -8,13 +8,14 @@
  * and `sheetName`. A grid that draws its cells another way (virtual scrolling) keeps the
  * charts working by keeping those four members.
  */
-import type { ChartPlan } from '../taskpane/plot/chart-plan';
 import { layoutPlot } from '../taskpane/plot/geometry';
 import type { PlotData, PlotPhasor } from '../taskpane/plot/model';
 import { renderSvg } from '../taskpane/plot/svg';
 import { a1, type CellPos } from './address';
 import { isDisplayError } from './engine';
-import type { Workbook } from './workbook';
+import type { PreviewChart, Workbook } from './workbook';
+
+export type { PreviewChart } from './workbook';
 
 /** What the overlay needs from the grid (see the module comment). */
 export interface OverlayHost {
@@ -22,14 +23,6 @@ export interface OverlayHost {
   readonly overlayLayer: HTMLElement;
   cellBox(pos: CellPos): { left: number; top: number; width: number; height: number };
   onRepaint(listener: () => void): () => void;
-}
-
-export interface PreviewChart {
-  readonly name: string;
-  /** The sheet the chart sits on, and its top-left cell there. */
-  readonly sheet: string;
-  readonly at: CellPos;
-  readonly plan: ChartPlan;
 }
 
 /** The chart's picture data from its helper cells, or a message when a cell cannot be used. */
@@ -69,7 +62,6 @@ export function chartData(workbook: Workbook, chart: PreviewChart): PlotData | s
 }
 
 export class ChartOverlay {
-  private readonly charts: PreviewChart[] = [];
   private readonly elements = new Map<string, HTMLElement>();
 
   constructor(
@@ -81,26 +73,32 @@ export class ChartOverlay {
 
   /** Names of the charts on `sheet`. */
   names(sheet: string): string[] {
-    return this.charts.filter((c) => c.sheet === sheet).map((c) => c.name);
+    return this.workbook.charts.filter((c) => c.sheet === sheet).map((c) => c.name);
   }
 
+  /** Adds a chart to the workbook (kept with it, drawn over the grid). */
   add(chart: PreviewChart): void {
-    this.charts.push(chart);
+    this.workbook.addChart(chart);
     this.render();
   }
 
   remove(name: string): void {
-    const i = this.charts.findIndex((c) => c.name === name);
-    if (i >= 0) this.charts.splice(i, 1);
-    this.elements.get(name)?.remove();
-    this.elements.delete(name);
+    this.workbook.removeChart(name);
+    this.render();
   }
 
   /** Draws the charts of the shown sheet from their helper cells; hides the others. */
   render(): void {
     const layer = this.grid.overlayLayer;
     const doc = layer.ownerDocument;
-    for (const chart of this.charts) {
+    const charts = this.workbook.charts;
+    for (const [name, element] of this.elements) {
+      if (!charts.some((c) => c.name === name)) {
+        element.remove();
+        this.elements.delete(name);
+      }
+    }
+    for (const chart of charts) {
       let box = this.elements.get(chart.name);
       if (!box) {
         box = doc.createElement('div');

@@ -5,8 +5,11 @@
  */
 import { DetailedCellError, HyperFormula } from 'hyperformula';
 import type { CellValue, RawCellContent, SimpleCellAddress } from 'hyperformula';
+import { clipMiddle, workbookMessages as M } from '../core/messages';
 import { functions as registryFunctions, specs as registrySpecs } from '../functions';
 import { registerRegistry, spillingFormulas, takePendingResizes } from './adapter';
+import { checkFormula, hasDoubledQuote } from './formula-guard';
+import { indexDependencyGraph } from './graph-index';
 import type { Registry } from './adapter';
 
 export { NAMESPACE, functionId, createPhzPlugin } from './adapter';
@@ -31,10 +34,85 @@ export function isDisplayError(v: unknown): v is DisplayError {
   return typeof v === 'object' && v !== null && 'error' in v && 'message' in v;
 }
 
-/** Engine value → display value. */
+/** Sheet size: Excel's (1,048,576 rows × 16,384 columns, A to XFD), so any .xlsx fits. */
+export const MAX_ROWS = 1_048_576;
+export const MAX_COLUMNS = 16_384;
+
+/** Longest message a cell shows (tooltip, status line); longer ones are cut in the middle. */
+export const MESSAGE_LIMIT = 300;
+
+/**
+ * The engine rounds a value it hands out to `precisionRounding` places after its leading
+ * digit by multiplying with 10^(14 − exponent), which overflows for numbers below about
+ * 1e-294: 1e-300 came out as NaN. The rounding is patched (once, on its class) to hand such
+ * a number out unrounded; `toDisplay` then keeps 15 figures of it.
+ */
+function keepTinyNumbers(hf: HyperFormula): void {
+  const exporter = (hf as unknown as { _exporter?: object })._exporter;
+  const proto = exporter ? (Object.getPrototypeOf(exporter) as { cellValueRounding?: (v: number) => number }) : undefined;
+  const round = proto?.cellValueRounding;
+  if (!proto || typeof round !== 'function') return;
+  proto.cellValueRounding = function (this: unknown, value: number): number {
+    const rounded = round.call(this, value);
+    return Number.isFinite(rounded) ? rounded : value;
+  };
+}
+
+/**
+ * Engine value → display value. Numbers keep 15 significant figures, as Excel keeps them;
+ * a value that is not finite becomes an error.
+ */
 export function toDisplay(v: CellValue): DisplayValue {
-  if (v instanceof DetailedCellError) return { error: v.value, message: v.message ?? '' };
+  if (v instanceof DetailedCellError) return { error: v.value, message: clipMiddle(v.message ?? '', MESSAGE_LIMIT) };
+  if (typeof v === 'number') {
+    if (!Number.isFinite(v)) return { error: '#NUM!', message: M.notFiniteValue };
+    return v === 0 ? 0 : Number(v.toPrecision(15));
+  }
   return v as DisplayValue;
+}
+
+let graphPatched = false;
+
+const parseDateTimeDefault = HyperFormula.defaultConfig.parseDateTime;
+
+/**
+ * The engine tries its date and time formats (DD/MM/YYYY, hh:mm …) on every text it is
+ * given; text with other characters than digits, separators and AM/PM (every phasor:
+ * `230∠-120`, `5+j2`) cannot be one, so it is turned away at once. Saves a few percent of a
+ * large paste of phasor text.
+ */
+function quickDateTime(...args: Parameters<typeof parseDateTimeDefault>): ReturnType<typeof parseDateTimeDefault> {
+  return /^[\d\s/.:\-apmAPM]*$/.test(args[0]) ? parseDateTimeDefault(...args) : undefined;
+}
+
+/** Formula texts the engine failed on after they passed the checks (bounded). */
+const failedFormulas = new Set<string>();
+
+/** Why a formula text is kept as text instead of being given to the engine, or undefined. */
+function refusal(text: string): string | undefined {
+  if (failedFormulas.has(text)) return M.formulaTooComplex;
+  const check = checkFormula(text);
+  return check.refused;
+}
+
+/**
+ * What the engine is given for what a person typed: a formula over the limits is kept as
+ * text (with the engine's leading apostrophe), so the cell keeps it and shows why; `1E-3`
+ * is written `1e-3`.
+ */
+export function prepareContent(raw: RawCellContent): RawCellContent {
+  if (typeof raw !== 'string' || raw.charCodeAt(0) !== 61 /* = */ || raw.length < 2) return raw;
+  if (failedFormulas.has(raw)) return `'${raw}`;
+  const check = checkFormula(raw);
+  return check.refused !== undefined ? `'${raw}` : check.formula;
+}
+
+function prepareRows(rows: RawCellContent[][]): RawCellContent[][] {
+  return rows.map((row) => row.map(prepareContent));
+}
+
+function isStackOverflow(e: unknown): boolean {
+  return e instanceof RangeError && /call stack/i.test(e.message);
 }
 
 /**
@@ -45,6 +123,13 @@ const LOGICAL_NAMES = [
   { name: 'TRUE', expression: '=TRUE()' },
   { name: 'FALSE', expression: '=FALSE()' },
 ];
+
+/** A name as the engine holds it: `expression` is a formula (`='Sheet 1'!$B$5`); `scope` a sheet, or none for the workbook. */
+export interface SerializedName {
+  readonly name: string;
+  readonly expression: string;
+  readonly scope?: string;
+}
 
 export interface EngineOptions {
   readonly registry?: Registry;
@@ -57,19 +142,94 @@ export interface EngineOptions {
  * spill areas whose size followed a change of inputs.
  */
 export class PhzEngine {
-  readonly hf: HyperFormula;
+  /** The engine itself; `rebuild` puts a new one in its place. */
+  hf: HyperFormula;
+  private readonly config: Record<string, unknown>;
 
   constructor(options: EngineOptions = {}) {
     registerRegistry(options.registry ?? defaultRegistry);
     // Excel keeps 15 significant figures of a number; the engine's default hands out 11
     // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures.
-    const config = { licenseKey: LICENSE_KEY, undoLimit: 0, useArrayArithmetic: true, precisionRounding: 14 };
-    const sheets = options.sheets ?? {};
+    // Excel keeps 15 significant figures of a number; the engine's default hands out 11
+    // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures. Its
+    // rounding also snaps sums that cancel to 0, as Excel does (smartRounding).
+    const config = {
+      licenseKey: LICENSE_KEY,
+      undoLimit: 0,
+      useArrayArithmetic: true,
+      precisionRounding: 14,
+      maxRows: MAX_ROWS,
+      maxColumns: MAX_COLUMNS,
+      parseDateTime: quickDateTime,
+    };
+    this.config = config;
+    if (!graphPatched) {
+      // the patch goes on the graph's class, so engines built from sheets get it from the start
+      const probe = HyperFormula.buildEmpty({ licenseKey: LICENSE_KEY });
+      indexDependencyGraph(probe);
+      keepTinyNumbers(probe);
+      probe.destroy();
+      graphPatched = true;
+    }
+    const sheets = Object.fromEntries(Object.entries(options.sheets ?? {}).map(([name, rows]) => [name, prepareRows(rows)]));
     this.hf =
       Object.keys(sheets).length > 0
         ? HyperFormula.buildFromSheets(sheets, config, LOGICAL_NAMES)
         : HyperFormula.buildEmpty(config, LOGICAL_NAMES);
+    indexDependencyGraph(this.hf);
     this.settle();
+  }
+
+  /**
+   * Replaces everything the engine holds by `sheets` (in this order) and `names`, built in
+   * one go (much faster than writing the cells into the sheets one block at a time).
+   */
+  rebuild(sheets: ReadonlyArray<{ readonly name: string; readonly rows: RawCellContent[][] }>, names: readonly SerializedName[]): void {
+    const order = sheets.map((s) => s.name);
+    const named = [
+      ...LOGICAL_NAMES,
+      ...names.map((n) => ({ name: n.name, expression: n.expression, ...(n.scope === undefined ? {} : { scope: order.indexOf(n.scope) }) })),
+    ];
+    const data: Record<string, RawCellContent[][]> = {};
+    for (const s of sheets) data[s.name] = prepareRows(s.rows.length > 0 ? s.rows : [[]]);
+    let next: HyperFormula | undefined;
+    try {
+      next = HyperFormula.buildFromSheets(data, this.config, named);
+      // object keys that look like numbers come first in JS: then the order is built again
+      if (next.getSheetNames().join('\u0000') !== order.join('\u0000')) {
+        next.destroy();
+        next = undefined;
+      }
+    } catch (e) {
+      next?.destroy();
+      next = undefined;
+      if (!isStackOverflow(e)) throw e;
+    }
+    if (!next) {
+      next = HyperFormula.buildEmpty(this.config, LOGICAL_NAMES);
+      for (const name of order) next.addSheet(name);
+      const old = this.hf;
+      this.hf = next;
+      old.destroy();
+      for (const n of names) this.hf.addNamedExpression(n.name, n.expression, n.scope === undefined ? undefined : this.hf.getSheetId(n.scope));
+      for (const s of sheets) if (s.rows.length > 0) this.setContents({ sheet: this.hf.getSheetId(s.name) ?? 0, row: 0, col: 0 }, s.rows);
+      return;
+    }
+    const old = this.hf;
+    this.hf = next;
+    old.destroy();
+    this.settle();
+  }
+
+  /** Names the engine holds (the workbook's own TRUE and FALSE left out). */
+  names(): SerializedName[] {
+    const out: SerializedName[] = [];
+    for (const n of this.hf.getAllNamedExpressionsSerialized()) {
+      if (n.scope === undefined && LOGICAL_NAMES.some((l) => l.name === n.name)) continue;
+      const scope = n.scope === undefined ? undefined : this.hf.getSheetName(n.scope);
+      out.push({ name: n.name, expression: String(n.expression), ...(scope === undefined ? {} : { scope }) });
+    }
+    return out;
   }
 
   /**
@@ -120,14 +280,57 @@ export class PhzEngine {
     return result;
   }
 
-  /** Sets a block of raw contents with its top-left at `at`. */
+  /**
+   * Sets a block of raw contents with its top-left at `at` (formulas checked first, see
+   * `prepareContent`). Should the engine still fail on a formula (its call stack), the
+   * block is written again with the formulas that fail kept as text, so nothing typed is
+   * lost and the page goes on.
+   */
   setContents(at: SimpleCellAddress, contents: RawCellContent[][]): void {
-    this.change((hf) => hf.setCellContents(at, contents));
+    const prepared = prepareRows(contents);
+    try {
+      this.change((hf) => hf.setCellContents(at, prepared));
+    } catch (e) {
+      if (!isStackOverflow(e)) throw e;
+      this.writeAvoidingFailures(at, prepared);
+    }
+  }
+
+  private writeAvoidingFailures(at: SimpleCellAddress, rows: RawCellContent[][]): void {
+    const safe = rows.map((row) => row.map((v) => (typeof v === 'string' && v.startsWith('=') ? null : v)));
+    this.change((hf) => hf.setCellContents(at, safe));
+    rows.forEach((row, r) =>
+      row.forEach((v, c) => {
+        if (typeof v !== 'string' || !v.startsWith('=')) return;
+        const cell = { sheet: at.sheet, row: at.row + r, col: at.col + c };
+        try {
+          this.change((hf) => hf.setCellContents(cell, [[v]]));
+        } catch (e) {
+          if (!isStackOverflow(e)) throw e;
+          if (failedFormulas.size > 1000) failedFormulas.clear();
+          failedFormulas.add(v);
+          this.change((hf) => hf.setCellContents(cell, [[`'${v}`]]));
+        }
+      }),
+    );
   }
 
   /** What the cell shows. */
   display(at: SimpleCellAddress): DisplayValue {
-    return toDisplay(this.hf.getCellValue(at));
+    const v = this.hf.getCellValue(at);
+    if (typeof v === 'string') {
+      if (v.charCodeAt(0) === 61 /* = */) {
+        const why = refusal(v);
+        if (why !== undefined && this.hf.getCellFormula(at) === undefined) return { error: '#ERROR!', message: why };
+      }
+      return v;
+    }
+    if (v instanceof DetailedCellError && v.value === '#ERROR!') {
+      const formula = this.hf.getCellFormula(at);
+      if (formula !== undefined && hasDoubledQuote(formula)) return { error: v.value, message: M.doubledQuote };
+      if (formula !== undefined && /^Parsing error/i.test(v.message ?? '')) return { error: v.value, message: M.unreadable(v.message ?? '') };
+    }
+    return toDisplay(v);
   }
 
   /**
@@ -139,6 +342,8 @@ export class PhzEngine {
     if (formula !== undefined) return formula;
     if (this.hf.isCellPartOfArray(at)) return null;
     const raw = this.hf.getCellSerialized(at);
+    // a formula kept as text (see `prepareContent`) is given back as typed
+    if (typeof raw === 'string' && raw.startsWith("'=") && refusal(raw.slice(1)) !== undefined) return raw.slice(1);
     return raw === undefined ? null : raw;
   }
 

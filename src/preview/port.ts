@@ -5,6 +5,7 @@
 import type { SelectionBlock } from '../taskpane/plot/model';
 import type {
   ActiveCell,
+  InsertResult,
   PhasorChartRequest,
   PhasorChartResult,
   PlotRange,
@@ -53,12 +54,14 @@ export class PreviewPort implements WorkbookPort {
     return { sheet, address: a1(pos), formula: rawToText(this.workbook.raw(sheet, pos.row, pos.col)) };
   }
 
-  async setActiveCellFormula(formula: string): Promise<void> {
-    if (!formula.startsWith('=')) throw new Error(`a formula starts with "=": got "${formula}"`);
+  /** Checks the active cell and writes in one synchronous step: nothing can come between. */
+  async insertIntoEmptyActiveCell(formula: string): Promise<InsertResult> {
+    if (!formula.startsWith('=')) throw new Error(`a formula starts with "=": got "${formula.slice(0, 40)}"`);
     const pos = this.grid.activeCell;
     const sheet = this.grid.sheetName;
-    this.workbook.setCell(sheet, pos.row, pos.col, formula, 'Insert function');
-    this.grid.say(`Inserted into ${a1(pos)} from the reference.`);
+    const { written } = this.workbook.setCellIfEmpty(sheet, pos.row, pos.col, formula, 'Insert function');
+    if (written) this.grid.say(`Inserted into ${a1(pos)} from the reference.`);
+    return { sheet, address: a1(pos), written };
   }
 
   sheetWritingBlocked(): string | null {

@@ -79,14 +79,11 @@ export function mountPane(root: HTMLElement, port: WorkbookPort | null, options:
     button.disabled = true;
     status.textContent = 'Inserting…';
     try {
-      const cell = await port.getActiveCell();
-      const where = `${cell.sheet}!${cell.address}`;
-      if (cell.formula !== '') {
-        status.textContent = `${where} is not empty, so nothing was written. Select an empty cell and try again.`;
-      } else {
-        await port.setActiveCellFormula(entry.starter);
-        status.textContent = `Inserted ${entry.starter} into ${where}. Edit its arguments to use your own cells.`;
-      }
+      const result = await port.insertIntoEmptyActiveCell(entry.starter);
+      const where = `${result.sheet}!${result.address}`;
+      status.textContent = result.written
+        ? `Inserted ${entry.starter} into ${where}. Edit its arguments to use your own cells.`
+        : `${where} is not empty, so nothing was written. Select an empty cell and try again.`;
     } catch (e) {
       status.textContent = `Could not insert into the ${port.hostName} workbook: ${e instanceof Error ? e.message : String(e)}`;
     } finally {

@@ -16,6 +16,15 @@ export interface ActiveCell {
   readonly formula: string;
 }
 
+/** What inserting into the active cell did. */
+export interface InsertResult {
+  /** Where: sheet and A1 address of the active cell. */
+  readonly sheet: string;
+  readonly address: string;
+  /** True when the formula was written; false when the cell was not empty. */
+  readonly written: boolean;
+}
+
 /**
  * A phasor chart that stays linked to cells (the phasor plot's "Insert as chart", also used
  * by worked sheets). Shared contract between the plot and the worked-sheet builder.
@@ -112,8 +121,12 @@ export interface WorkbookPort extends PlotPort {
   readonly hostName: string;
   /** The active cell: the one with focus, also when a range is selected. */
   getActiveCell(): Promise<ActiveCell>;
-  /** Writes a formula (starting with `=`) into the active cell; results may spill. */
-  setActiveCellFormula(formula: string): Promise<void>;
+  /**
+   * Writes a formula (starting with `=`) into the active cell only if that cell is empty,
+   * checking and writing in one go (nothing typed in between is overwritten); results may
+   * spill. Says what happened: written, or what the cell holds.
+   */
+  insertIntoEmptyActiveCell(formula: string): Promise<InsertResult>;
   /**
    * Worked sheets: writes `plan` to a NEW sheet (a free, valid name made from
    * `plan.sheetName`), never over an existing sheet or cell, with its names scoped to that

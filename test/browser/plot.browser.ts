@@ -11,6 +11,7 @@ import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import { chromium } from 'playwright-core';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { cellText, demoRow } from './grid';
 import { CHROMIUM_ARGS, chromiumPath, repoRoot, startServer } from './server';
 import type { RunningServer } from './server';
 
@@ -20,7 +21,6 @@ let page: Page;
 const problems: string[] = [];
 const artifacts = path.join(repoRoot, 'test-artifacts');
 
-const cell = (address: string) => page.locator(`td[data-cell="${address}"]`);
 const nameBox = () => page.locator('#pv-namebox');
 const plot = () => page.locator('[data-part="plot"]');
 const arrows = (role = 'phasor') => plot().locator(`.sp-plot-figure g.phasor[data-role="${role}"]`);
@@ -32,12 +32,11 @@ async function select(address: string): Promise<void> {
 }
 
 async function text(address: string): Promise<string> {
-  return (await cell(address).textContent()) ?? '';
+  return cellText(page, address);
 }
 
 async function rowOf(label: string): Promise<number> {
-  const td = page.locator('td[data-cell^="A"]', { hasText: new RegExp(`^${label.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`) }).first();
-  return Number((await td.getAttribute('data-cell'))!.slice(1));
+  return demoRow(label);
 }
 
 interface Drawn {
@@ -68,7 +67,7 @@ beforeAll(async () => {
     if (m.type() === 'error') problems.push(`console ${m.type()}: ${m.text()}`);
   });
   await page.goto(`${server.origin}/preview.html`);
-  await page.locator('td[data-cell="B6"]').waitFor();
+  await page.locator('.pv-cell[data-cell="B6"]').waitFor();
   await page.locator('button[data-tab="plot"]').click();
 });
 

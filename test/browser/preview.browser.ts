@@ -13,6 +13,7 @@ import { specByName, specs } from '../../src/functions';
 import { SUB_BOARD } from '../../src/preview/demo';
 import { evaluateFormula, isDisplayError } from '../../src/preview/engine';
 import { formatNumber } from '../../src/preview/format';
+import { cellText, demoRow, intendedError, reveal } from './grid';
 import { CHROMIUM_ARGS, chromiumPath, repoRoot, startServer } from './server';
 import type { RunningServer } from './server';
 
@@ -22,7 +23,7 @@ let page: Page;
 const requests: string[] = [];
 const problems: string[] = [];
 
-const cell = (address: string) => page.locator(`td[data-cell="${address}"]`);
+const cell = (address: string) => page.locator(`.pv-cell[data-cell="${address}"]`);
 const formulaBar = () => page.getByLabel('Formula', { exact: true });
 const nameBox = () => page.locator('#pv-namebox');
 
@@ -40,7 +41,7 @@ async function typeInto(address: string, text: string): Promise<void> {
 }
 
 async function text(address: string): Promise<string> {
-  return (await cell(address).textContent()) ?? '';
+  return cellText(page, address);
 }
 
 /** A documented result cell as the grid shows it. */
@@ -50,9 +51,7 @@ function shown(v: string | number | boolean): string {
 
 /** The row (1-based) of a scenario line, found by its label in column A. */
 async function rowOf(label: string): Promise<number> {
-  const td = page.locator('td[data-cell^="A"]', { hasText: new RegExp(`^${label.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}$`) }).first();
-  const address = await td.getAttribute('data-cell');
-  return Number(address!.slice(1));
+  return demoRow(label);
 }
 
 beforeAll(async () => {
@@ -66,7 +65,7 @@ beforeAll(async () => {
     if (m.type() === 'error' || /Content Security Policy/i.test(m.text())) problems.push(`console ${m.type()}: ${m.text()}`);
   });
   await page.goto(`${server.origin}/preview.html`);
-  await page.locator('td[data-cell="B6"]').waitFor();
+  await page.locator('.pv-cell[data-cell="B6"]').waitFor();
 });
 
 afterAll(async () => {
@@ -83,14 +82,19 @@ describe('preview workbook in the browser', () => {
     expect(await cell(`B${row}`).getAttribute('class')).toContain('k-input');
     const currentRow = await rowOf('Phase current');
     expect(await cell(`B${currentRow}`).getAttribute('class')).toContain('k-formula');
-    // One line of the demo shows an error on purpose, with its message as the tooltip.
-    expect(await page.locator('td.k-error').count()).toBe(1);
-    expect(((await page.locator('td.k-error').getAttribute('title')) ?? '').length).toBeGreaterThan(10);
-    expect(await page.locator('td[data-cell]').count()).toBeGreaterThanOrEqual(26 * 200);
-    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Schedule DB-OW1', 'Examples']);
-
+    // No error in view; one line further down shows an error on purpose, with its message as the tooltip.
+    expect(await page.locator('.pv-cell.k-error').count()).toBe(0);
+    // Only the cells in view are in the page (virtual scrolling), each with its address.
+    const drawn = await page.locator('.pv-cell[data-cell]').count();
+    expect(drawn).toBeGreaterThan(100);
+    expect(drawn).toBeLessThan(3000);
     mkdirSync(path.join(repoRoot, 'test-artifacts'), { recursive: true });
     await page.screenshot({ path: path.join(repoRoot, 'test-artifacts/preview.png') });
+    const errorCell = await reveal(page, intendedError());
+    expect(await errorCell.getAttribute('class')).toContain('k-error');
+    expect(((await errorCell.getAttribute('title')) ?? '').length).toBeGreaterThan(10);
+    await page.evaluate(() => document.querySelector('.pv-scroll')!.scrollTo(0, 0));
+    expect(await page.locator('.pv-tabs button[role="tab"]').allTextContents()).toEqual(['Sub-board', 'Schedule DB-OW1', 'Examples']);
   });
 
   it('fits the window: the page itself never scrolls, the grid and the pane scroll inside', async () => {

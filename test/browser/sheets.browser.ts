@@ -13,6 +13,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { calculations } from '../../src/taskpane/sheets/calculations';
 import { demoValues, readField } from '../../src/taskpane/sheets/calculation';
 import { COL, cellA1 } from '../../src/taskpane/sheets/plan';
+import { cellText, reveal } from './grid';
 import { CHROMIUM_ARGS, chromiumPath, repoRoot, startServer } from './server';
 import type { RunningServer } from './server';
 
@@ -22,7 +23,6 @@ let page: Page;
 const problems: string[] = [];
 const shots = path.join(repoRoot, 'test-artifacts');
 
-const cell = (address: string) => page.locator(`td[data-cell="${address}"]`);
 const nameBox = () => page.locator('#pv-namebox');
 const statusLine = () => page.locator('.sps-status');
 const activeTab = () => page.locator('.pv-tabs button[role="tab"][aria-selected="true"]');
@@ -40,7 +40,7 @@ async function typeInto(address: string, text: string): Promise<void> {
 }
 
 async function text(address: string): Promise<string> {
-  return (await cell(address).textContent()) ?? '';
+  return cellText(page, address);
 }
 
 /** The plan's layout for a calculation's demo (addresses do not depend on the date). */
@@ -64,7 +64,7 @@ beforeAll(async () => {
     if (m.type() === 'error') problems.push(`console ${m.type()}: ${m.text()}`);
   });
   await page.goto(`${server.origin}/preview.html`);
-  await page.locator('td[data-cell="B6"]').waitFor();
+  await page.locator('.pv-cell[data-cell="B6"]').waitFor();
   mkdirSync(shots, { recursive: true });
 });
 
@@ -99,10 +99,10 @@ describe('worked sheets from the pane, in the preview', () => {
     await expect.poll(() => text('A1')).toBe(plan.title);
     // results shown: every step's 6-figure value, no error anywhere, every check passing
     for (const s of plan.steps) expect((await text(cellA1(s.row, COL.polar))).length, s.name).toBeGreaterThan(0);
-    expect(await page.locator('td.k-error').count()).toBe(0);
+    expect(await page.locator('.pv-cell.k-error').count()).toBe(0);
     for (const c of plan.checks) await expect.poll(() => text(cellA1(c.row, COL.verdict)), { message: c.label }).toBe('pass');
     // inputs look like inputs
-    expect(await cell(cellA1(plan.inputs[0].row, COL.input)).getAttribute('class')).toMatch(/k-input|s-input/);
+    expect(await (await reveal(page, cellA1(plan.inputs[0].row, COL.input))).getAttribute('class')).toMatch(/k-input|s-input/);
     await page.screenshot({ path: path.join(shots, `worked-sheet-${id}.png`) });
     // and the end of the sheet: checks and cautions
     await selectCell(cellA1(plan.extent.rows - 1, 1));

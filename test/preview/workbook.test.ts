@@ -3,7 +3,8 @@ import { describe, expect, it } from 'vitest';
 import { a1, columnName, parseA1, parseRectA1, rectA1 } from '../../src/preview/address';
 import { PhzEngine } from '../../src/preview/engine';
 import { displayText, formatNumber, isPhasorText } from '../../src/preview/format';
-import { Workbook } from '../../src/preview/workbook';
+import { UNDO_LIMIT, Workbook } from '../../src/preview/workbook';
+import { workbookMessages } from '../../src/core/messages';
 
 function book() {
   const engine = new PhzEngine({ sheets: { S: [['3+j4', '=PHZ.MAG(A1)'], ['6+j8', null], [null, '=PHZ.SPLIT(A1:A2)']] } });
@@ -144,5 +145,83 @@ describe('workbook: a whole new sheet at once (worked sheets)', () => {
   it('refuses a name that is taken', () => {
     const { wb } = book();
     expect(() => wb.addSheetWith({ name: 'S', rows: [] })).toThrow(/already exists/);
+  });
+});
+
+describe('workbook: blocks, limits and documents', () => {
+  it('pastes, clears, undoes and redoes a block as one engine write each', () => {
+    const { wb, engine } = book();
+    const writes: number[] = [];
+    const original = engine.setContents.bind(engine);
+    engine.setContents = (at, rows) => {
+      writes.push(rows.length);
+      original(at, rows);
+    };
+    const rows = Array.from({ length: 5000 }, (_, i) => [`${i}+j1`, `=PHZ.MAG(D${i + 10})`]);
+    wb.setBlock('S', 9, 3, rows, 'Paste');
+    wb.clear('S', { top: 9, left: 3, bottom: 5008, right: 4 });
+    expect(wb.undo()).toBe('Clear');
+    expect(wb.undo()).toBe('Paste');
+    expect(wb.redo()).toBe('Paste');
+    expect(writes).toEqual([5000, 5000, 5000, 5000, 5000]);
+    expect(engine.display({ sheet: 0, row: 5008, col: 4 })).toBeCloseTo(Math.hypot(4999, 1), 9);
+  });
+
+  it('clears only the used part of a whole-sheet selection', () => {
+    const { wb, at } = book();
+    wb.clear('S', { top: 0, left: 0, bottom: 1_048_575, right: 16_383 });
+    expect(at(0, 0)).toBe(null);
+    expect(at(2, 1)).toBe(null);
+    wb.undo();
+    expect(at(0, 1)).toBe(5);
+  });
+
+  it('refuses a block that would run off the sheet, writing nothing', () => {
+    const { wb, at } = book();
+    expect(() => wb.setBlock('S', 1_048_575, 0, [['a'], ['b']])).toThrow(/a sheet ends at row 1,048,576 and column XFD/);
+    expect(wb.canUndo()).toBe(false);
+    expect(at(0, 0)).toBe('3+j4');
+  });
+
+  it('says when the undo history lets its oldest step go', () => {
+    const { wb } = book();
+    const notices: string[] = [];
+    wb.onNotice((m) => notices.push(m));
+    for (let i = 0; i < UNDO_LIMIT; i++) wb.setCell('S', 5, 0, i);
+    expect(notices).toEqual([]);
+    wb.setCell('S', 5, 0, 'one more');
+    expect(notices).toEqual([workbookMessages.undoDropped(UNDO_LIMIT)]);
+    let undone = 0;
+    while (wb.undo()) undone++;
+    expect(undone).toBe(UNDO_LIMIT);
+  });
+
+  it('inserts only into an empty cell', () => {
+    const { wb } = book();
+    expect(wb.setCellIfEmpty('S', 0, 0, '=1')).toEqual({ written: false, held: '3+j4' });
+    expect(wb.setCellIfEmpty('S', 3, 2, '=1')).toEqual({ written: false, held: 'part of a spilled result' });
+    expect(wb.setCellIfEmpty('S', 7, 7, '=1+1')).toEqual({ written: true, held: '' });
+    expect(wb.raw('S', 7, 7)).toBe('=1+1');
+  });
+
+  it('replaces the whole workbook by a document as one undoable step', () => {
+    const { wb } = book();
+    const other = new Workbook(new PhzEngine({ sheets: { Other: [['=PHZ.MAG("6+j8")']] } }));
+    other.setColumnWidth('Other', 0, 20);
+    wb.replaceWith(other.toDocument(), 'Open other.xlsx');
+    expect(wb.sheetNames()).toEqual(['Other']);
+    expect(wb.engine.display({ sheet: wb.sheetId('Other'), row: 0, col: 0 })).toBe(10);
+    expect(wb.columnWidths('Other')).toEqual([20]);
+    expect(wb.undo()).toBe('Open other.xlsx');
+    expect(wb.sheetNames()).toEqual(['S']);
+    expect(wb.raw('S', 2, 1)).toBe('=PHZ.SPLIT(A1:A2)');
+  });
+
+  it('sets a column width as an undoable step', () => {
+    const { wb } = book();
+    wb.setColumnWidth('S', 2, 18.5);
+    expect(wb.columnWidths('S')).toEqual([0, 0, 18.5]);
+    expect(wb.undo()).toBe('Column width');
+    expect(wb.columnWidths('S')).toEqual([0, 0, 0]);
   });
 });

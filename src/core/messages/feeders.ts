@@ -2,6 +2,7 @@
  * Messages of the panel-schedule, voltage-drop and loss calculations. Each says which
  * argument (and row), what was wrong, and what to do.
  */
+import { excerpt } from './quote';
 
 /** How a connection is written, for the messages that refuse one. */
 export const CONNECTION_FORMS =
@@ -10,13 +11,13 @@ export const CONNECTION_FORMS =
 export const feederMessages = {
   // --- schedule columns ----------------------------------------------------------------
   connection(where: string, got: string): string {
-    return `${where} is "${got}", which is not a connection: ${CONNECTION_FORMS}`;
+    return `${where} is "${excerpt(got)}", which is not a connection: ${CONNECTION_FORMS}`;
   },
   connectionBlank(where: string): string {
     return `${where} is blank but its circuit has a load: ${CONNECTION_FORMS}`;
   },
   connectionRepeated(where: string, got: string): string {
-    return `${where} is "${got}", which names one line twice: a line-to-line circuit joins two different lines (1-2, 2-3 or 3-1)`;
+    return `${where} is "${excerpt(got)}", which names one line twice: a line-to-line circuit joins two different lines (1-2, 2-3 or 3-1)`;
   },
   notColumn(name: string, rows: number, cols: number): string {
     return `${name} is a block of ${rows} rows by ${cols} columns: give one column of the schedule (one cell per circuit)`;
@@ -26,13 +27,13 @@ export const feederMessages = {
   },
   noLoad: 'the schedule holds no load (every load cell is blank or 0): give each circuit its load in W, kW, VA or kVA',
   loadUnit(where: string, text: string, unit: string): string {
-    return `${where} is "${text}", in ${unit}: give a circuit's load as real power (W, kW) or apparent power (VA, kVA); a plain number is W`;
+    return `${where} is "${excerpt(text)}", in ${unit}: give a circuit's load as real power (W, kW) or apparent power (VA, kVA); a plain number is W`;
   },
   loadNegative(where: string, value: number): string {
     return `${where} is ${value} W: a schedule lists loads of 0 or more (a blank or 0 marks a spare way)`;
   },
   loadText(where: string, text: string): string {
-    return `${where} is "${text}", which is not a load: give a number of W, or a number with W, kW, VA or kVA (e.g. 2.2 kW, 1500 VA)`;
+    return `${where} is "${excerpt(text)}", which is not a load: give a number of W, or a number with W, kW, VA or kVA (e.g. 2.2 kW, 1500 VA)`;
   },
   powerFactorBlank(where: string): string {
     return `${where} is blank but its circuit has a load: give the power factor (1 for a resistive load; e.g. 0.85, or 0.9 lead for a leading one)`;
@@ -44,13 +45,13 @@ export const feederMessages = {
     return `${where} is ${value}: a negative power factor is not read as leading here (sign conventions for power factor differ, and a negative one often means power flowing back); write the magnitude with the word lead, e.g. ${-value} lead`;
   },
   powerFactorText(where: string, text: string): string {
-    return `${where} is "${text}", which is not a power factor: give a number above 0 and at most 1, optionally followed by lag or lead (e.g. 0.85, 0.9 lead; ind and cap are read as lag and lead)`;
+    return `${where} is "${excerpt(text)}", which is not a power factor: give a number above 0 and at most 1, optionally followed by lag or lead (e.g. 0.85, 0.9 lead; ind and cap are read as lag and lead)`;
   },
   fraction(where: string, value: number, what: string): string {
     return `${where} is ${value}, but ${what} is a fraction from 0 to 1 (0.4) or a percentage written with its sign (40 %): give one of those`;
   },
   fractionText(where: string, text: string, what: string): string {
-    return `${where} is "${text}", which is not ${what}: give a fraction from 0 to 1 (0.4) or a percentage with its sign (40 %)`;
+    return `${where} is "${excerpt(text)}", which is not ${what}: give a fraction from 0 to 1 (0.4) or a percentage with its sign (40 %)`;
   },
   harmonicsWithoutNonlinear:
     'harmonics were given but nonlinear was left out, so no circuit has a non-linear share for them to apply to: give nonlinear (the share of each circuit’s load that is non-linear, 0 to 1)',
@@ -67,24 +68,24 @@ export const feederMessages = {
 
   // --- voltage drop ----------------------------------------------------------------------
   dropSystem(got: string): string {
-    return `system is "${got}": give "1P" (single-phase two-wire), "3P" (three-phase, balanced) or "3P4W" (three-phase four-wire with the actual neutral current)`;
+    return `system is "${excerpt(got)}": give "1P" (single-phase two-wire), "3P" (three-phase, balanced) or "3P4W" (three-phase four-wire with the actual neutral current)`;
   },
   dropCurrentCount(system: string, n: number): string {
     return system === '3P4W'
       ? `current holds ${n} value${n === 1 ? '' : 's'}, but system "3P4W" needs the three line currents I1, I2, I3 as phasors (e.g. the first column of PHZ.SCHEDULE or PHZ.STARLOAD)`
-      : `current holds ${n} values, but system "${system}" needs one: the load current in A, or the load in W, kW, VA or kVA`;
+      : `current holds ${n} values, but system "${excerpt(system)}" needs one: the load current in A, or the load in W, kW, VA or kVA`;
   },
   dropCurrentUnit(text: string, unit: string): string {
-    return `current is "${text}", in ${unit}: give the load current in A, or the load as real power (W, kW) or apparent power (VA, kVA)`;
+    return `current is "${excerpt(text)}", in ${unit}: give the load current in A, or the load as real power (W, kW) or apparent power (VA, kVA)`;
   },
   dropCurrentText(text: string): string {
-    return `current is "${text}", which is not a load: give the current in A (e.g. 63 or 63 A), or the load in W, kW, VA or kVA (e.g. 40 kW)`;
+    return `current is "${excerpt(text)}", which is not a load: give the current in A (e.g. 63 or 63 A), or the load in W, kW, VA or kVA (e.g. 40 kW)`;
   },
   dropCurrentNegative(value: number): string {
     return `current is ${value}: give the load current (or load) as a magnitude of 0 or more`;
   },
   dropNeedsPf(system: string): string {
-    return `power_factor is left out: system "${system}" needs the load's power factor (1 for a resistive load; e.g. 0.85, or 0.9 lead for a leading one)`;
+    return `power_factor is left out: system "${excerpt(system)}" needs the load's power factor (1 for a resistive load; e.g. 0.85, or 0.9 lead for a leading one)`;
   },
   dropPfNotUsed:
     'power_factor was given, but system "3P4W" takes the line currents as phasors, whose angles already say the power factor: leave power_factor out',

@@ -7,4 +7,6 @@ export { readerMessages } from './readers';
 export { valueMessages } from './values';
 export { threePhaseMessages } from './threephase';
 export { plotMessages } from './plot';
+export { workbookMessages } from './workbook';
+export { clipMiddle, excerpt, quoted, EXCERPT_LENGTH } from './quote';
 export { feederMessages } from './feeders';

@@ -1,4 +1,5 @@
 /** Messages of the task pane's phasor plot and chart insertion (part of the one catalogue). */
+import { excerpt } from './quote';
 
 function count(n: number): string {
   return n.toLocaleString('en-US');
@@ -41,9 +42,9 @@ export const plotMessages = {
     return `The helper cells would go at ${area}, but cells there hold data; nothing was written. Choose an empty area.`;
   },
   chartBadCell(cell: string): string {
-    return `“${cell}” is not a cell address (like B22) or a one-row pair of cells (like B5:C5).`;
+    return `“${excerpt(cell)}” is not a cell address (like B22) or a one-row pair of cells (like B5:C5).`;
   },
   chartNoSheet(sheet: string): string {
-    return `There is no sheet named “${sheet}”.`;
+    return `There is no sheet named “${excerpt(sheet)}”.`;
   },
 };

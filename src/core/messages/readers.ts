@@ -1,5 +1,6 @@
 /** Messages of the argument readers and the shared function guard. */
 import type { Quantity, UnitSymbol } from '../parse';
+import { excerpt } from './quote';
 
 /** What a value in each unit is, for messages. */
 const MEANING: Record<UnitSymbol, string> = {
@@ -13,7 +14,7 @@ const MEANING: Record<UnitSymbol, string> = {
 };
 
 function clip(text: string): string {
-  return text.length > 40 ? `${text.slice(0, 37)}…` : text;
+  return excerpt(text);
 }
 
 function article(word: string): string {
@@ -48,11 +49,11 @@ export const readerMessages = {
     return `${where} holds ${what}, whose properties carry no phasor: give it the properties real and imag, or magnitude and angle (degrees)`;
   },
   entityHalf(where: string, what: string, has: string, missing: string): string {
-    return `${where} holds ${what} with the property "${has}" but no "${missing}": give both (0 for a zero part)`;
+    return `${where} holds ${what} with the property "${clip(has)}" but no "${missing}": give both (0 for a zero part)`;
   },
   /** Where a property of an entity cell sits, for the number messages: `z, property "real"`. */
   property(where: string, name: string): string {
-    return `${where}, property "${name}"`;
+    return `${where}, property "${clip(name)}"`;
   },
   notFinite(where: string): string {
     return `${where} is not a finite number: give a finite value`;
@@ -88,7 +89,7 @@ export const readerMessages = {
     return `${where} is ${value} but must be a whole number`;
   },
   choice(where: string, got: string, choices: readonly string[]): string {
-    return `${where} is "${got}", which is not one of ${choices.map((c) => `"${c}"`).join(', ')}: use one of those (any case)`;
+    return `${where} is "${clip(got)}", which is not one of ${choices.map((c) => `"${c}"`).join(', ')}: use one of those (any case)`;
   },
   /** A choice given as something other than text (a data type); `got` names it. */
   choiceNotText(where: string, got: string, choices: readonly string[]): string {

@@ -2,6 +2,7 @@
  * Messages of the three-phase analysis (sets, loads, solvers, neutral, sequences,
  * unbalance). Each says which argument, what was wrong, and what to do.
  */
+import { excerpt } from './quote';
 export const threePhaseMessages = {
   // --- counts and shapes -------------------------------------------------------------
   needThree(name: string, n: number, what: string): string {
@@ -80,7 +81,7 @@ export const threePhaseMessages = {
   networkSingular:
     'the delta load and line impedances resonate (the node equations are singular), so no finite solution exists: check the reactances',
   neutralWord(got: string): string {
-    return `neutral is "${got}": give 0 (or leave the argument out) for a solid neutral, an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral`;
+    return `neutral is "${excerpt(got)}": give 0 (or leave the argument out) for a solid neutral, an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral`;
   },
   neutralBlank:
     'neutral refers to a blank cell: give 0 for a solid neutral, an impedance (e.g. 0.5+j0.2) for an impedant neutral, or "open" for no neutral (only a left-out argument means a solid neutral)',

@@ -7,6 +7,7 @@
 import { functions, specs } from '../index';
 import type { HostResult } from '../spec';
 import { isPhzError } from '../../core/errors';
+import { clipMiddle } from '../../core/messages';
 
 /**
  * Longest error message we hand to the host. Office documents no limit for
@@ -22,15 +23,14 @@ export const GENERIC_MESSAGE =
 
 type Implementation = (...args: any[]) => HostResult;
 
-/** Cuts a message to the host limit, ending with an ellipsis when shortened. */
+/**
+ * Fits a message to the host limit. Messages quote only an excerpt of what was given
+ * (src/core/messages/quote.ts), so they fit already; one that still does not is cut in the
+ * middle, keeping its start (which argument) and its end (what to do).
+ */
 export function fitHostMessage(message: string): string {
   const text = message.trim() || GENERIC_MESSAGE;
-  if (text.length <= HOST_MESSAGE_LIMIT) return text;
-  // Do not split a surrogate pair (e.g. an emoji or a rare symbol) at the cut.
-  let end = HOST_MESSAGE_LIMIT - 1;
-  const code = text.charCodeAt(end - 1);
-  if (code >= 0xd800 && code <= 0xdbff) end--;
-  return `${text.slice(0, end)}…`;
+  return clipMiddle(text, HOST_MESSAGE_LIMIT);
 }
 
 /**

@@ -1,5 +1,5 @@
 /** The WorkbookPort for Excel, on the Office.js workbook API. */
-import type { ActiveCell, SheetWriteResult, WorkbookPort } from '../port';
+import type { ActiveCell, InsertResult, SheetWriteResult, WorkbookPort } from '../port';
 import type { CellRole, SheetPlan } from '../sheets/plan';
 import { cellA1, columnLetter, planGrid, uniqueSheetName } from '../sheets/plan';
 import { excelPlotPort } from './excel-plot';
@@ -91,10 +91,27 @@ export const excelPort: WorkbookPort = {
     });
   },
 
-  setActiveCellFormula(formula: string): Promise<void> {
+  /**
+   * One Excel.run, two round trips: the first reads the active cell (its formulas and
+   * whether it belongs to a spill), the second writes only when it was empty. Nothing
+   * runs between the check and the write on the pane's side.
+   */
+  insertIntoEmptyActiveCell(formula: string): Promise<InsertResult> {
+    if (!formula.startsWith('=')) return Promise.reject(new Error(`a formula starts with "=": got "${formula.slice(0, 40)}"`));
     return Excel.run(async (context) => {
-      context.workbook.getActiveCell().formulas = [[formula]];
+      const cell = context.workbook.getActiveCell();
+      cell.load('address,formulas,values,worksheet/name');
       await context.sync();
+      const held = cell.formulas[0]?.[0];
+      const shown = cell.values[0]?.[0];
+      const result = { sheet: cell.worksheet.name, address: localAddress(cell.address) };
+      // a cell showing part of a spilled result has no formula of its own but a value
+      if ((held !== undefined && held !== null && held !== '') || (shown !== undefined && shown !== null && shown !== '')) {
+        return { ...result, written: false };
+      }
+      cell.formulas = [[formula]];
+      await context.sync();
+      return { ...result, written: true };
     });
   },
 

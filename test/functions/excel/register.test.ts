@@ -143,20 +143,21 @@ describe('fitHostMessage', () => {
     expect(fitHostMessage(msg)).toBe(msg);
   });
 
-  it('cuts a longer message to the limit, ending with an ellipsis', () => {
-    const msg = `${'a'.repeat(300)}END`;
+  it('cuts a longer message in the middle, keeping which argument and the advice at its end', () => {
+    const msg = `digits is "${'a'.repeat(300)}": give a whole number from 1 to 15`;
     const fitted = fitHostMessage(msg);
     expect(fitted).toHaveLength(HOST_MESSAGE_LIMIT);
-    expect(fitted.endsWith('…')).toBe(true);
-    expect(msg.startsWith(fitted.slice(0, -1))).toBe(true);
+    expect(fitted.startsWith('digits is "aaa')).toBe(true);
+    expect(fitted.endsWith('": give a whole number from 1 to 15')).toBe(true);
+    expect(fitted).toContain('…');
   });
 
-  it('does not split a surrogate pair at the cut', () => {
-    // U+1D4B5 (mathematical script Z) is two UTF-16 units; place it across the cut point.
-    const msg = `${'b'.repeat(HOST_MESSAGE_LIMIT - 2)}\u{1D4B5}${'c'.repeat(20)}`;
+  it('does not split a surrogate pair at either side of the cut', () => {
+    // U+1D4B5 (mathematical script Z) is two UTF-16 units; a run of them makes every cut point fall near one.
+    const msg = '\u{1D4B5}'.repeat(300);
     const fitted = fitHostMessage(msg);
     expect(fitted.length).toBeLessThanOrEqual(HOST_MESSAGE_LIMIT);
-    expect(fitted).toBe(`${'b'.repeat(HOST_MESSAGE_LIMIT - 2)}…`);
+    expect(fitted).not.toMatch(/[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/);
   });
 
   it('applies to PhzError messages on their way to the host', () => {
