@@ -44,7 +44,21 @@ const CRASH = spec('CRASH', [{ name: 'a', type: 'scalar', description: '' }], ()
   throw new TypeError("Cannot read properties of undefined (reading 'im')");
 });
 
-const registry: Registry = { specs: [EACH, COUNT, MISSING, TABLE, CRASH] };
+/** Counts its calls; one cell out, whatever comes in. */
+let pairCalls = 0;
+const PAIR = spec(
+  'PAIR',
+  [
+    { name: 'a', type: 'matrix', description: '' },
+    { name: 'b', type: 'scalar', description: '', optional: true },
+  ],
+  (a: unknown[][], b: unknown) => {
+    pairCalls++;
+    return [[`${a.flat().map(String).join('|')}/${String(b)}`]];
+  },
+);
+
+const registry: Registry = { specs: [EACH, COUNT, MISSING, TABLE, CRASH, PAIR] };
 const last = () => calls[calls.length - 1];
 
 describe('adapter: what implementations receive', () => {
@@ -161,5 +175,38 @@ describe('adapter: spill areas', () => {
     expect(engine.rawContent({ sheet: 0, row: 1, col: 1 })).toBe(null);
     expect(engine.spillAnchor({ sheet: 0, row: 1, col: 1 })).toEqual({ sheet: 0, row: 0, col: 0 });
     expect(engine.spillAnchor({ sheet: 0, row: 0, col: 0 })).toBeUndefined();
+  });
+});
+
+describe('adapter: one call per result', () => {
+  it('runs the implementation once for a formula entered (the size query and the evaluation share it)', () => {
+    const engine = new PhzEngine({ registry, sheets: { S: [['x', 2]] } });
+    pairCalls = 0;
+    engine.setContents({ sheet: 0, row: 0, col: 2 }, [['=PHZ.PAIR(A1, B1)']]);
+    expect(pairCalls).toBe(1);
+    expect(engine.display({ sheet: 0, row: 0, col: 2 })).toBe('x/2');
+  });
+
+  it('calls again with the new values when an input changes, never giving the kept result', () => {
+    const engine = new PhzEngine({ registry, sheets: { S: [['x', 2, '=PHZ.PAIR(A1, B1)']] } });
+    engine.setContents({ sheet: 0, row: 0, col: 1 }, [[3]]);
+    expect(engine.display({ sheet: 0, row: 0, col: 2 })).toBe('x/3');
+    engine.setContents({ sheet: 0, row: 0, col: 0 }, [['y']]);
+    expect(engine.display({ sheet: 0, row: 0, col: 2 })).toBe('y/3');
+  });
+
+  it('computes again when an input is itself computed after the size query (pasted together)', () => {
+    const engine = new PhzEngine({ registry, sheets: { S: [[]] } });
+    // C1 is entered before A1 holds its value, so its size query saw an empty cell
+    engine.setContents({ sheet: 0, row: 0, col: 0 }, [['=PHZ.PAIR(B1)', 'b', '=PHZ.PAIR(A1)']]);
+    expect(engine.display({ sheet: 0, row: 0, col: 0 })).toBe('b/null');
+    expect(engine.display({ sheet: 0, row: 0, col: 2 })).toBe('b/null/null');
+  });
+
+  it('gives a range argument its cells in order, and a one-cell range the same as the cell', () => {
+    const engine = new PhzEngine({ registry, sheets: { S: [[1, 2, '=PHZ.PAIR(A1:B1, A1:A1)']] } });
+    expect(engine.display({ sheet: 0, row: 0, col: 2 })).toBe('1|2/1');
+    engine.setContents({ sheet: 0, row: 0, col: 1 }, [[5]]);
+    expect(engine.display({ sheet: 0, row: 0, col: 2 })).toBe('1|5/1');
   });
 });
