@@ -10,6 +10,7 @@ import { functions as registryFunctions, specs as registrySpecs } from '../funct
 import { registerRegistry, spillingFormulas, takePendingResizes } from './adapter';
 import { checkFormula, hasDoubledQuote } from './formula-guard';
 import { indexDependencyGraph } from './graph-index';
+import { quickenParsing } from './parse-cache';
 import type { Registry } from './adapter';
 
 export { NAMESPACE, functionId, createPhzPlugin } from './adapter';
@@ -167,6 +168,7 @@ export class PhzEngine {
       // the patch goes on the graph's class, so engines built from sheets get it from the start
       const probe = HyperFormula.buildEmpty({ licenseKey: LICENSE_KEY });
       indexDependencyGraph(probe);
+      quickenParsing(probe);
       keepTinyNumbers(probe);
       probe.destroy();
       graphPatched = true;
