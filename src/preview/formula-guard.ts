@@ -33,45 +33,62 @@ export function checkFormula(text: string): FormulaCheck {
   let depth = 0;
   let deepest = 0;
   let operators = 0;
-  let out = '';
-  let changed = false;
+  // where an exponent is written with a capital E (written `e` for the engine)
+  let capitals: number[] | undefined;
   for (let i = 0; i < text.length; i++) {
-    const ch = text[i];
-    if (ch === '"' || ch === "'") {
+    const code = text.charCodeAt(i);
+    if (code === 34 /* " */ || code === 39 /* ' */) {
       // text or a quoted sheet name, to its closing quote (a doubled quote stays inside)
       let j = i + 1;
       for (; j < text.length; j++) {
-        if (text[j] === ch) {
-          if (text[j + 1] === ch) j++;
+        if (text.charCodeAt(j) === code) {
+          if (text.charCodeAt(j + 1) === code) j++;
           else break;
         }
       }
-      out += text.slice(i, j + 1);
       i = j;
       continue;
     }
-    if (ch === '(' || ch === '{') deepest = Math.max(deepest, ++depth);
-    else if (ch === ')' || ch === '}') depth--;
-    else if ('+-*/^&=<>'.includes(ch) && i > 0) operators++;
-    else if ((ch === 'E' || ch === 'e') && /[0-9.]/.test(text[i - 1] ?? '') && /[0-9]/.test(text[i + 1] === '+' || text[i + 1] === '-' ? (text[i + 2] ?? '') : (text[i + 1] ?? ''))) {
+    if (code === 40 /* ( */ || code === 123 /* { */) deepest = Math.max(deepest, ++depth);
+    else if (code === 41 /* ) */ || code === 125 /* } */) depth--;
+    else if (OPERATOR[code] === 1) {
+      if (i > 0) operators++;
+    } else if ((code === 69 /* E */ || code === 101 /* e */) && isNumberChar(text.charCodeAt(i - 1))) {
+      const sign = text.charCodeAt(i + 1) === 43 /* + */ || text.charCodeAt(i + 1) === 45; /* - */
+      if (!isDigit(text.charCodeAt(sign ? i + 2 : i + 1))) continue;
       // an exponent when the number before it starts a token of its own
       let k = i - 1;
-      while (k >= 0 && /[0-9.]/.test(text[k])) k--;
+      while (k >= 0 && isNumberChar(text.charCodeAt(k))) k--;
       if (k < 0 || !NAME_CHAR.test(text[k])) {
-        if (ch === 'E') changed = true;
-        out += 'e';
-        if (text[i + 1] === '+' || text[i + 1] === '-') {
-          out += text[i + 1];
-          i++;
-        }
-        continue;
+        if (code === 69) (capitals ??= []).push(i);
+        // the sign belongs to the exponent, not an operator
+        if (sign) i++;
       }
     }
-    out += ch;
   }
   if (deepest > MAX_NESTING) return { refused: M.formulaTooDeep(deepest, MAX_NESTING) };
   if (operators > MAX_OPERATORS) return { refused: M.formulaTooManyOperators(operators, MAX_OPERATORS) };
-  return { formula: changed ? out : text };
+  if (!capitals) return { formula: text };
+  let out = '';
+  let from = 0;
+  for (const at of capitals) {
+    out += `${text.slice(from, at)}e`;
+    from = at + 1;
+  }
+  return { formula: out + text.slice(from) };
+}
+
+/** `+ - * / ^ & = < >` by character code. */
+const OPERATOR = new Uint8Array(128);
+for (const ch of '+-*/^&=<>') OPERATOR[ch.charCodeAt(0)] = 1;
+
+function isDigit(code: number): boolean {
+  return code >= 48 && code <= 57;
+}
+
+/** A digit or the decimal point. */
+function isNumberChar(code: number): boolean {
+  return (code >= 48 && code <= 57) || code === 46;
 }
 
 /** True when `text` (outside quotes) holds a doubled quote inside text, which the engine cannot read. */

@@ -44,10 +44,15 @@ const originals = new WeakMap<object, ParserInternals['parse']>();
 /** Relative texts one engine keeps at most (each a formula of another shape). */
 const KEPT_SHAPES = 50_000;
 
-const REF = /^(\$?)([A-Za-z]{1,3})(\$?)([1-9][0-9]{0,6})$/;
-const NAME_CHAR = /[A-Za-z0-9_.$]/;
 const NUMBER = /^[0-9]*\.?[0-9]*[eE]?$/;
 const LETTERS = /^[A-Za-z_.]+$/;
+
+/** Characters of a name, a number or a cell reference: A–Z a–z 0–9 _ . $ (by code). */
+const NAME_CHAR = new Uint8Array(128);
+for (let c = 0; c < 128; c++) {
+  const ch = String.fromCharCode(c);
+  if (/[A-Za-z0-9_.$]/.test(ch)) NAME_CHAR[c] = 1;
+}
 
 /** True when white space and then `(` follow position `j`. */
 function bracketAfterSpace(text: string, j: number): boolean {
@@ -56,10 +61,34 @@ function bracketAfterSpace(text: string, j: number): boolean {
   return k > j && text[k] === '(';
 }
 
-function columnIndex(letters: string): number {
-  let n = 0;
-  for (let i = 0; i < letters.length; i++) n = n * 26 + ((letters.charCodeAt(i) | 32) - 96);
-  return n - 1;
+function isLetterCode(c: number): boolean {
+  return (c >= 65 && c <= 90) || (c >= 97 && c <= 122);
+}
+
+/**
+ * Reads `text[i, j)` as a cell reference (`$?` 1–3 letters `$?` a row from 1 without a
+ * leading 0): its column, row (both from 0) and which are absolute; `undefined` otherwise.
+ */
+function readReference(text: string, i: number, j: number): { col: number; row: number; absCol: boolean; absRow: boolean } | undefined {
+  let p = i;
+  const absCol = text.charCodeAt(p) === 36; /* $ */
+  if (absCol) p++;
+  let col = 0;
+  const lettersFrom = p;
+  while (p < j && isLetterCode(text.charCodeAt(p))) col = col * 26 + ((text.charCodeAt(p++) | 32) - 96);
+  if (p === lettersFrom || p - lettersFrom > 3) return undefined;
+  const absRow = text.charCodeAt(p) === 36;
+  if (absRow) p++;
+  const digitsFrom = p;
+  if (p >= j || text.charCodeAt(p) === 48 /* 0 */) return undefined;
+  let row = 0;
+  while (p < j) {
+    const c = text.charCodeAt(p++);
+    if (c < 48 || c > 57) return undefined;
+    row = row * 10 + (c - 48);
+  }
+  if (p - digitsFrom > 7) return undefined;
+  return { col: col - 1, row: row - 1, absCol, absRow };
 }
 
 /**
@@ -70,13 +99,13 @@ function columnIndex(letters: string): number {
  */
 export function relativeText(text: string, row: number, col: number, maxColumns: number, maxRows: number): string | undefined {
   let out = '';
-  let lastRefFlags = '';
+  let lastRefFlags = -1;
   let rangeOpen = false;
   for (let i = 0; i < text.length; ) {
-    const ch = text[i];
     const code = text.charCodeAt(i);
-    if (code > 127 || ch === "'" || ch === '!' || ch === '\\' || ch === '#' || ch === '?' || ch === '[' || ch === ']') return undefined;
-    if (ch === '"') {
+    // 33 ! 35 # 39 ' 63 ? 91 [ 92 \ 93 ]
+    if (code > 127 || code === 33 || code === 35 || code === 39 || code === 63 || code === 91 || code === 92 || code === 93) return undefined;
+    if (code === 34 /* " */) {
       const end = text.indexOf('"', i + 1);
       if (end < 0) return undefined;
       const literal = text.slice(i, end + 1);
@@ -87,43 +116,41 @@ export function relativeText(text: string, row: number, col: number, maxColumns:
       if (rangeOpen) return undefined;
       continue;
     }
-    if (NAME_CHAR.test(ch)) {
+    if (NAME_CHAR[code] === 1) {
       let j = i + 1;
-      while (j < text.length && NAME_CHAR.test(text[j])) j++;
-      const run = text.slice(i, j);
-      const m = REF.exec(run);
-      if (text[j] === '(') {
-        const upper = run.toUpperCase();
+      while (j < text.length && NAME_CHAR[text.charCodeAt(j)] === 1) j++;
+      if (text.charCodeAt(j) === 40 /* ( */) {
+        const upper = text.slice(i, j).toUpperCase();
         if (upper === 'OFFSET' || upper === 'HYPERLINK' || rangeOpen) return undefined;
-        out += run;
-      } else if (bracketAfterSpace(text, j)) {
-        // a name or reference, white space, then a bracket: left to the engine
-        return undefined;
-      } else if (m) {
-        const c = columnIndex(m[2]);
-        const r = Number(m[4]) - 1;
-        if (c >= maxColumns || r >= maxRows) return undefined;
-        const flags = `${m[1]}${m[3]}`;
+        out += text.slice(i, j);
+        i = j;
+        continue;
+      }
+      // a name or reference, white space, then a bracket: left to the engine
+      if (bracketAfterSpace(text, j)) return undefined;
+      const ref = readReference(text, i, j);
+      if (ref) {
+        if (ref.col >= maxColumns || ref.row >= maxRows) return undefined;
+        const flags = (ref.absCol ? 1 : 0) + (ref.absRow ? 2 : 0);
         if (rangeOpen && flags !== lastRefFlags) return undefined;
         rangeOpen = false;
         lastRefFlags = flags;
-        out += `\u0001${m[1] ? `C${c}` : `c${c - col}`}${m[3] ? `R${r}` : `r${r - row}`}\u0001`;
-        if (text[j] === ':') {
+        out += `\u0001${ref.absCol ? `C${ref.col}` : `c${ref.col - col}`}${ref.absRow ? `R${ref.row}` : `r${ref.row - row}`}\u0001`;
+        if (text.charCodeAt(j) === 58 /* : */) {
           rangeOpen = true;
           out += ':';
           j++;
         }
-      } else if (NUMBER.test(run) || LETTERS.test(run)) {
-        if (rangeOpen || run.toUpperCase().includes('OFFSET')) return undefined;
-        out += run;
       } else {
-        return undefined;
+        const run = text.slice(i, j);
+        if (!(NUMBER.test(run) || LETTERS.test(run)) || rangeOpen || run.toUpperCase().includes('OFFSET')) return undefined;
+        out += run;
       }
       i = j;
       continue;
     }
-    if (ch === ':' || rangeOpen) return undefined;
-    out += ch;
+    if (code === 58 /* : */ || rangeOpen) return undefined;
+    out += text[i];
     i++;
   }
   return rangeOpen ? undefined : out;
