@@ -82,6 +82,8 @@ export class Keeper {
   private journalChars = 0;
   private readonly delayMs: number;
   private problem = false;
+  /** Something changed since the copy last written (true until a copy is known to hold the workbook). */
+  private changed = true;
 
   constructor(
     private readonly workbook: Workbook,
@@ -109,6 +111,8 @@ export class Keeper {
       this.workbook.setBlock(e.sheet, e.top, e.left, e.rows, 'Restore');
       replayed++;
     }
+    // the copy and the journal hold all of it: leaving the page need not write it again
+    this.changed = copy === undefined;
     this.workbook.clearHistory();
     this.seq = Math.max(after, ...entries.map((e) => e.seq));
     return { copy, replayed };
@@ -117,7 +121,18 @@ export class Keeper {
   /** Starts following the workbook: every change is journalled or scheduled. */
   start(): void {
     this.workbook.onCells((sheet, top, left, rows) => this.journalBlock(sheet, top, left, rows));
-    this.workbook.onChange(() => this.schedule(this.delayMs));
+    this.workbook.onChange(() => {
+      this.changed = true;
+      this.schedule(this.delayMs);
+    });
+  }
+
+  /**
+   * Writes the whole workbook when something changed since the last copy (the page is
+   * hidden or left: a reload then waits for no copy that is already kept).
+   */
+  flushIfChanged(): Promise<void> {
+    return this.changed ? this.flush() : this.writing;
   }
 
   /** Writes the whole workbook now (page hidden, or a large change). */
@@ -133,13 +148,17 @@ export class Keeper {
       this.report(e);
       return this.writing;
     }
+    this.changed = false;
     this.writing = this.writing
       .then(() => this.options.store.save({ doc, seq, savedAt: Date.now() }))
       .then(() => {
         this.trimJournal(seq);
         this.problem = false;
       })
-      .catch((e: unknown) => this.report(e));
+      .catch((e: unknown) => {
+        this.changed = true;
+        this.report(e);
+      });
     return this.writing;
   }
 

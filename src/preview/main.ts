@@ -120,9 +120,9 @@ async function start(): Promise<void> {
   keeper.start();
   // a hidden page may never come back (tab closed, browser quit): write the copy now
   document.addEventListener('visibilitychange', () => {
-    if (document.visibilityState === 'hidden') void keeper.flush();
+    if (document.visibilityState === 'hidden') void keeper.flushIfChanged();
   });
-  window.addEventListener('pagehide', () => void keeper.flush());
+  window.addEventListener('pagehide', () => void keeper.flushIfChanged());
   grid.focus();
   if (problem) grid.say(problem);
   else if (restored) grid.say(restored);

@@ -115,6 +115,29 @@ describe('keeping the workbook in the browser', () => {
     expect(store.copy?.doc.sheets[0].rows[10 + JOURNAL_BLOCK_CELLS][4]).toBe(JOURNAL_BLOCK_CELLS);
   });
 
+  it('writes the copy on leaving the page only when something changed since the last one', async () => {
+    const store = memoryStore();
+    const journal = memoryJournal();
+    await new Keeper(book(), { store, journal }).flush();
+    const wb = new Workbook(new PhzEngine());
+    const keeper = new Keeper(wb, { store, journal, delayMs: 60_000 });
+    await keeper.restore(() => undefined);
+    keeper.start();
+    const saves = store.saves;
+    await keeper.flushIfChanged();
+    expect(store.saves, 'nothing changed since the copy was restored').toBe(saves);
+    wb.setCell('Board', 7, 0, 'changed');
+    await keeper.flushIfChanged();
+    expect(store.saves).toBe(saves + 1);
+    expect(store.copy?.doc.sheets[0].rows[7][0]).toBe('changed');
+    await keeper.flushIfChanged();
+    expect(store.saves, 'the copy holds the change').toBe(saves + 1);
+    // a fresh workbook (the demo, nothing kept yet) is written on leaving
+    const fresh = memoryStore();
+    await new Keeper(book(), { store: fresh }).flushIfChanged();
+    expect(fresh.saves).toBe(1);
+  });
+
   it('refuses a kept copy that is not a workbook of the preview, and says why', async () => {
     const store = memoryStore();
     store.copy = { doc: { format: 'something else' } as never, seq: 0, savedAt: 0 };
