@@ -154,7 +154,7 @@ export async function saveXlsx(input: SaveInput): Promise<ArrayBuffer> {
     const ws = wb.addWorksheet(fileNames.get(sheet.name)!);
     writeSheet(ws, sheet, input);
   }
-  return (await wb.xlsx.writeBuffer()) as ArrayBuffer;
+  return (await wb.xlsx.writeBuffer({ zip: { compression: 'DEFLATE', compressionOptions: { level: 1 } } } as never)) as ArrayBuffer;
 }
 
 function writeSheet(ws: ExcelJSTypes.Worksheet, sheet: SheetDocument, input: SaveInput): void {
@@ -164,10 +164,16 @@ function writeSheet(ws: ExcelJSTypes.Worksheet, sheet: SheetDocument, input: Sav
     ws.getColumn(c + 1).width = pixelsToFileWidth(p);
   });
   const spilled = new Set<string>();
+  // one style object for every cell without a role: ExcelJS works out a cell's style once per
+  // object (it keeps them in a WeakMap), where each cell's own empty object costs it a render
+  const plain: Partial<ExcelJSTypes.Style> = {};
   sheet.rows.forEach((row, r) => {
+    // the row's own style too (ExcelJS keeps one per row; its typings leave it out)
+    if (row.length > 0) (ws.getRow(r + 1) as unknown as { style: Partial<ExcelJSTypes.Style> }).style = plain;
     row.forEach((raw, c) => {
       if (raw === null || raw === undefined || raw === '') return;
       const cell = ws.getCell(r + 1, c + 1);
+      cell.style = plain;
       if (typeof raw === 'string' && raw.startsWith('=')) {
         const result = cachedResult(input.valueAt(sheet.name, r, c));
         const size = input.spillAt(sheet.name, r, c);
@@ -192,12 +198,19 @@ function writeSheet(ws: ExcelJSTypes.Worksheet, sheet: SheetDocument, input: Sav
       }
     });
   });
+  const roleStyles = new Map<CellStyle, Partial<ExcelJSTypes.Style>>();
   for (const [r, c, style] of sheet.styles) {
-    const look = LOOKS[style];
-    const cell = ws.getCell(r + 1, c + 1);
-    if (look.font) cell.font = { ...look.font };
-    if (look.fill) cell.fill = { type: 'pattern', pattern: 'solid', fgColor: { argb: look.fill } };
-    if (look.ruled) cell.border = { bottom: { style: 'thin', color: { argb: 'FF9AA3AB' } } };
+    let shared = roleStyles.get(style);
+    if (!shared) {
+      const look = LOOKS[style];
+      shared = {
+        ...(look.font ? { font: { ...look.font } } : {}),
+        ...(look.fill ? { fill: { type: 'pattern', pattern: 'solid', fgColor: { argb: look.fill } } } : {}),
+        ...(look.ruled ? { border: { bottom: { style: 'thin', color: { argb: 'FF9AA3AB' } } } } : {}),
+      };
+      roleStyles.set(style, shared);
+    }
+    ws.getCell(r + 1, c + 1).style = shared;
   }
 }
 
