@@ -5,8 +5,10 @@
  * Worked sheets (issue 9): the largest sheet planned ≤ 1 ms and written into the preview
  * ≤ 250 ms (our own targets: the pane should answer at once). Panel schedules (issue 11):
  * PHZ.SCHEDULE on 500 ways ≤ 1 ms per call (our own target: a schedule recalculates at once).
- * The preview workbook (issue 12, bench/workbook.bench.ts): paste, recalculation, undo and
- * reload of 40,000 rows of PHZ.DIV, each ≤ 1 s.
+ * The preview workbook (issue 12, bench/workbook.bench.ts): paste, recalculation, undo, redo,
+ * reload, save as .xlsx and open of 40,000 rows of PHZ.DIV, each ≤ 1 s of waiting (for save
+ * and open, what the page does ≤ 1 s; the file worker's part runs with the grid usable and is
+ * printed beside it).
  *
  * The DIV figures come twice: on one constant input (whose angle hits the exact 15°
  * tables) and over 256 distinct realistic inputs (bench/inputs.ts: decimals, angles that
@@ -183,17 +185,31 @@ async function main(): Promise<void> {
   const write = measure('sheetWrite');
   row(`Worked sheet: write it into the preview (engine evaluates all)`, `${write.toFixed(1)} ms`, write <= 250 ? 'met (≤ 250 ms)' : 'NOT MET (≤ 250 ms)');
   const rows = PASTE_ROWS.toLocaleString('en-US');
+  const workbookFigures = new Map<string, number>();
   for (const [name, label] of [
     ['wbPaste', `Preview workbook: paste ${rows} rows × 3 columns, a PHZ.DIV per row`],
     ['wbEdit', `Preview workbook: edit the common input, ${rows} PHZ.DIV recalculate`],
     ['wbUndoEdit', 'Preview workbook: undo of that edit'],
     ['wbUndoPaste', `Preview workbook: undo of the ${rows}-row paste (one block)`],
+    ['wbRedoPaste', `Preview workbook: redo of it`],
     ['wbSaveCopy', `Preview workbook: the whole workbook as a document (the browser copy)`],
     ['wbReload', `Preview workbook: reload it from that copy (engine rebuilt)`],
+    ['wbSavePage', `Preview workbook: save as .xlsx, the page's part (cells and results read)`],
+    ['wbSaveWorker', `Preview workbook: save as .xlsx, the file worker's part (ExcelJS writes)`],
+    ['wbOpenWorker', `Preview workbook: open that .xlsx, the file worker's part (ExcelJS reads)`],
+    ['wbOpenPage', `Preview workbook: open it, the page's part (engine built, one undo step)`],
   ] as const) {
     const t = measure(name);
-    row(label, `${t.toFixed(0)} ms`, t <= 1000 ? 'met (≤ 1 s)' : 'NOT MET (≤ 1 s)');
+    workbookFigures.set(name, t);
+    // the worker's part runs while the grid stays usable: its figure is the wait for the file, not a freeze
+    const note = name.endsWith('Worker') ? (t <= 1000 ? 'within 1 s (grid usable meanwhile)' : 'over 1 s (grid usable meanwhile)') : t <= 1000 ? 'met (≤ 1 s)' : 'NOT MET (≤ 1 s)';
+    row(label, `${t.toFixed(0)} ms`, note);
   }
+  const figure = (name: string) => workbookFigures.get(name) ?? NaN;
+  const save = figure('wbSavePage') + figure('wbSaveWorker');
+  const open = figure('wbOpenWorker') + figure('wbOpenPage');
+  row('Preview workbook: save as .xlsx, both parts (click to file)', `${save.toFixed(0)} ms`, save <= 1000 ? 'within 1 s' : 'over 1 s');
+  row('Preview workbook: open that .xlsx, both parts (file chosen to workbook shown)', `${open.toFixed(0)} ms`, open <= 1000 ? 'within 1 s' : 'over 1 s');
 }
 
 void main();

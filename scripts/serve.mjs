@@ -32,7 +32,7 @@ if (!Number.isInteger(port) || port < 0 || port > 65535) {
 
 /** Same policy as the meta tag in src/preview/preview.html (read from the built page when present). */
 const FALLBACK_CSP =
-  "default-src 'self'; script-src 'self'; style-src 'self' 'unsafe-inline'; img-src 'self' data: blob:; font-src 'self'; connect-src 'self'; object-src 'none'; base-uri 'self'; form-action 'self'";
+  "default-src 'self'; script-src 'self'; worker-src 'self'; style-src 'self' 'unsafe-inline'; img-src 'self' data: blob:; font-src 'self'; connect-src 'self'; object-src 'none'; base-uri 'self'; form-action 'self'";
 
 const TYPES = {
   '.html': 'text/html; charset=utf-8',

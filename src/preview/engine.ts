@@ -10,6 +10,8 @@ import { functions as registryFunctions, specs as registrySpecs } from '../funct
 import { registerRegistry, spillingFormulas, takePendingResizes } from './adapter';
 import { checkFormula, hasDoubledQuote } from './formula-guard';
 import { indexDependencyGraph } from './graph-index';
+import { MAX_COLUMNS, MAX_ROWS } from './values';
+import type { DisplayValue } from './values';
 import { quickenParsing } from './parse-cache';
 import type { Registry } from './adapter';
 
@@ -22,22 +24,8 @@ export const defaultRegistry: Registry = { specs: registrySpecs, functions: regi
 /** HyperFormula's licence for GPL v3 use (the preview is a development tool). */
 export const LICENSE_KEY = 'gpl-v3';
 
-/** One displayed cell: a value, `null` for empty, or an error with its message. */
-export type DisplayValue = number | string | boolean | null | DisplayError;
-export interface DisplayError {
-  /** As the cell shows it: `#VALUE!`, `#N/A`, `#SPILL!`, … */
-  readonly error: string;
-  /** The message behind it (for PHZ functions, the engineer-facing text). */
-  readonly message: string;
-}
-
-export function isDisplayError(v: unknown): v is DisplayError {
-  return typeof v === 'object' && v !== null && 'error' in v && 'message' in v;
-}
-
-/** Sheet size: Excel's (1,048,576 rows × 16,384 columns, A to XFD), so any .xlsx fits. */
-export const MAX_ROWS = 1_048_576;
-export const MAX_COLUMNS = 16_384;
+export { isDisplayError, MAX_COLUMNS, MAX_ROWS } from './values';
+export type { DisplayError, DisplayValue } from './values';
 
 /** Cells a written block needs before building the engine again is considered (`PhzEngine.setContents`). */
 export const BULK_CELLS = 10_000;
@@ -424,7 +412,8 @@ export class PhzEngine {
 
   /** The block a formula at `at` fills (1×1 for a scalar result). */
   spillSize(at: SimpleCellAddress): { width: number; height: number } {
-    if (this.hf.getCellFormula(at) === undefined || !this.hf.isCellPartOfArray(at)) return { width: 1, height: 1 };
+    // asked first: most formulas fill one cell, and reading a formula writes its text again
+    if (!this.hf.isCellPartOfArray(at) || this.hf.getCellFormula(at) === undefined) return { width: 1, height: 1 };
     const vertex = this.vertexAt(at);
     return { width: vertex?.width ?? 1, height: vertex?.height ?? 1 };
   }

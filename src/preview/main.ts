@@ -18,7 +18,9 @@ import { PreviewPlotPort } from './plot-port';
 import { PreviewPort } from './port';
 import { Workbook } from './workbook';
 import type { WorkbookDocument } from './workbook';
-import { FileError, readXlsx, saveXlsx } from './xlsx';
+import { FileError, prepareSave } from './xlsx';
+import { xlsxTasks } from './xlsx-client';
+import type { XlsxTasks } from './xlsx-client';
 
 function adoptStyles(doc: Document, text: string): void {
   // A constructed stylesheet, so the page needs no inline <style> of its own.
@@ -116,7 +118,9 @@ async function start(): Promise<void> {
     grid.select({ row: 5, col: 1 });
   }
   grid.onSelectionChange(() => saveView(grid));
-  addWorkbookActions(grid, workbook, keeper, () => theDemo().doc);
+  // the file worker: ExcelJS reads and writes files there, so the grid stays usable meanwhile
+  const files = xlsxTasks(typeof Worker === 'undefined' ? undefined : () => new Worker(new URL('./xlsx-worker.ts', import.meta.url), { name: 'preview-file-worker' }));
+  addWorkbookActions(grid, workbook, keeper, () => theDemo().doc, files);
   keeper.start();
   // a hidden page may never come back (tab closed, browser quit): write the copy now
   document.addEventListener('visibilitychange', () => {
@@ -134,8 +138,22 @@ async function start(): Promise<void> {
   }
 }
 
+/** Says `text(seconds)` in the status line now and every half second until the returned function is called. */
+function ticking(grid: Grid, text: (seconds: number) => string): () => void {
+  const started = Date.now();
+  const say = () => grid.say(text(Math.floor((Date.now() - started) / 1000)));
+  say();
+  const timer = setInterval(say, 500);
+  return () => clearInterval(timer);
+}
+
+/** Lets the page paint (the status line) before a long piece of work in the page. */
+function nextPaint(): Promise<void> {
+  return new Promise((resolve) => requestAnimationFrame(() => setTimeout(resolve, 0)));
+}
+
 /** New workbook, Open (.xlsx) and Save as .xlsx, in the formula bar row. */
-function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo: () => WorkbookDocument): void {
+function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo: () => WorkbookDocument, files: XlsxTasks): void {
   const doc = grid.element.ownerDocument;
   const newButton = button(doc, 'New', 'New workbook: the demo workbook again (asks first; Ctrl+Z brings this one back)');
   const openButton = button(doc, 'Open…', 'Open an .xlsx file (replaces this workbook; Ctrl+Z brings it back)');
@@ -167,19 +185,28 @@ function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo
     picker.value = '';
     if (!file) return;
     void (async () => {
-      grid.say(`Reading ${file.name}…`);
+      openButton.disabled = true;
+      // read in the file worker: the grid stays usable (and what is typed meanwhile goes into
+      // the workbook the file replaces, which Ctrl+Z brings back)
+      const stop = ticking(grid, (s) => M.reading(file.name, file.size / 1024 / 1024, s));
       try {
-        const read = await readXlsx(await file.arrayBuffer(), file.name);
+        const read = await files.read(await file.arrayBuffer(), file.name);
+        stop();
         if (!window.confirm(M.confirmOpen(file.name))) {
           grid.say('Nothing was opened.');
           return;
         }
+        grid.say(M.opening(file.name, read.cells));
+        await nextPaint();
         workbook.replaceWith(read.doc, `Open ${file.name}`);
         grid.showSheet(read.doc.sheets[0].name);
         void keeper.flush();
         grid.say(M.opened(file.name, read.doc.sheets.length, read.cells, read.skipped));
       } catch (e) {
+        stop();
         grid.say(e instanceof FileError ? e.message : M.fileUnreadable(file.name, e instanceof Error ? e.message : String(e)));
+      } finally {
+        openButton.disabled = false;
       }
       grid.focus();
     })();
@@ -189,15 +216,19 @@ function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo
     void (async () => {
       const name = `${grid.sheetName.replace(/[\\/:*?"<>|]+/g, '_') || 'workbook'}.xlsx`;
       saveButton.disabled = true;
-      grid.say('Saving…');
+      let stop = (): void => undefined;
       try {
-        const data = await saveXlsx({
+        // what the cells hold and show is read here, at once; the file is built in the worker
+        const data = prepareSave({
           doc: workbook.toDocument(),
           valueAt: (sheet, row, col) => workbook.engine.display({ sheet: workbook.sheetId(sheet), row, col }),
           spillAt: (sheet, row, col) => workbook.engine.spillSize({ sheet: workbook.sheetId(sheet), row, col }),
           widthsPx: (sheet, count) => grid.columnPixels(sheet, count),
         });
-        const url = URL.createObjectURL(new Blob([data], { type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' }));
+        stop = ticking(grid, (s) => M.saving(s));
+        const bytes = await files.build(data);
+        stop();
+        const url = URL.createObjectURL(new Blob([bytes], { type: 'application/vnd.openxmlformats-officedocument.spreadsheetml.sheet' }));
         const link = doc.createElement('a');
         link.href = url;
         link.download = name;
@@ -207,6 +238,7 @@ function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo
         setTimeout(() => URL.revokeObjectURL(url), 10_000);
         grid.say(M.saved(name));
       } catch (e) {
+        stop();
         grid.say(`The workbook could not be saved as .xlsx: ${e instanceof Error ? e.message : String(e)}`);
       } finally {
         saveButton.disabled = false;

@@ -69,6 +69,32 @@ async function timed(name: string, action: () => Promise<unknown>): Promise<numb
   return ms;
 }
 
+/**
+ * Starts noting the longest time the page did not get to run a timer (a frozen page), and
+ * returns a function that stops and gives it in ms: printed with the timings, never asserted.
+ */
+async function watchBlocking(): Promise<() => Promise<number>> {
+  await page.evaluate(() => {
+    const w = window as unknown as { blockWatch?: { longest: number; stop: boolean } };
+    const watch = { longest: 0, stop: false };
+    w.blockWatch = watch;
+    let last = performance.now();
+    const tick = () => {
+      const now = performance.now();
+      watch.longest = Math.max(watch.longest, now - last);
+      last = now;
+      if (!watch.stop) setTimeout(tick, 0);
+    };
+    tick();
+  });
+  return () =>
+    page.evaluate(() => {
+      const watch = (window as unknown as { blockWatch: { longest: number; stop: boolean } }).blockWatch;
+      watch.stop = true;
+      return Math.round(watch.longest);
+    });
+}
+
 /** Pastes `text` as the system clipboard would deliver it (a paste event with text/plain). */
 async function pasteText(tsv: string): Promise<void> {
   await page.evaluate((t) => {
@@ -255,11 +281,15 @@ describe('holds 100,000 rows', () => {
 describe('opens and saves .xlsx', () => {
   let saved = '';
 
-  it('saves the workbook as an .xlsx file that Excel can read', async () => {
+  it('saves the workbook as an .xlsx file that Excel can read, built in the file worker', async () => {
+    const blocking = await watchBlocking();
     const started = Date.now();
     const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('button', { name: 'Save .xlsx' }).click()]);
     timings['save as .xlsx (40,000 rows), to the file'] = Date.now() - started;
-    console.log(`save as .xlsx: ${timings['save as .xlsx (40,000 rows), to the file']} ms`);
+    timings['save as .xlsx: longest the page was blocked (ms)'] = await blocking();
+    console.log(`save as .xlsx: ${timings['save as .xlsx (40,000 rows), to the file']} ms; page blocked at most ${timings['save as .xlsx: longest the page was blocked (ms)']} ms`);
+    // ExcelJS ran in the file worker, not in the page (the page's policy let it start)
+    expect(page.workers().map((w) => w.url())).toContainEqual(expect.stringContaining('preview-file-worker'));
     saved = (await download.path())!;
     const x = new ExcelJS.Workbook();
     await x.xlsx.load(readFileSync(saved) as unknown as ExcelJS.Buffer);
@@ -273,10 +303,13 @@ describe('opens and saves .xlsx', () => {
   it('opens it again: the same cells and results, after asking first', async () => {
     await typeInto('E2', 'typed after saving');
     page.once('dialog', (d) => void d.accept());
+    const blocking = await watchBlocking();
     await timed('open the .xlsx (40,000 rows)', async () => {
       await page.locator('input[type="file"]').setInputFiles(saved);
       await expect.poll(() => status().textContent(), { timeout: 30_000 }).toMatch(/^.*Opened /);
     });
+    timings['open the .xlsx: longest the page was blocked (ms)'] = await blocking();
+    console.log(`open the .xlsx: page blocked at most ${timings['open the .xlsx: longest the page was blocked (ms)']} ms`);
     await page.locator(`.pv-tab[data-sheet="${bigSheet}"]`).click();
     await go(`C${ROWS}`);
     expect(await text(`C${ROWS}`)).toBe(expectedC(ROWS - 1, 6));
@@ -285,6 +318,42 @@ describe('opens and saves .xlsx', () => {
     // undo brings back the workbook from before the file was opened
     await key('Control+z');
     await expect.poll(() => text('E2')).toBe('typed after saving');
+  });
+
+  it('loses nothing typed while a file is read: it is in the workbook the file replaced, which Ctrl+Z brings back', async () => {
+    page.once('dialog', (d) => void d.accept());
+    await page.locator('input[type="file"]').setInputFiles(saved);
+    // typed at once, in one go in the page (name box, formula bar, Enter), so the file cannot
+    // replace the workbook half-way: while the file worker reads, or on a slow run just after
+    const typedWhileReading = await page.evaluate((sheet) => {
+      const reading = /Reading /.test(document.querySelector('.pv-status')?.textContent ?? '');
+      const box = document.querySelector('#pv-namebox') as HTMLInputElement;
+      box.value = `${sheet}!F3`;
+      box.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true }));
+      const bar = document.querySelector('input[aria-label="Formula"]') as HTMLInputElement;
+      bar.focus();
+      bar.value = 'typed while reading';
+      bar.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true }));
+      return reading;
+    }, bigSheet);
+    timings['typed while the file was read (1 = yes)'] = typedWhileReading ? 1 : 0;
+    await expect.poll(() => status().textContent(), { timeout: 30_000 }).toMatch(/Opened /);
+    await page.locator(`.pv-tab[data-sheet="${bigSheet}"]`).click();
+    if (typedWhileReading) {
+      // the file replaced the workbook it was typed into: Ctrl+Z (the open) brings that back
+      expect(await text('F3')).toBe('');
+      await key('Control+z');
+      await expect.poll(() => status().textContent()).toContain('Undid: Open');
+      await page.locator(`.pv-tab[data-sheet="${bigSheet}"]`).click();
+    }
+    expect(await text('F3')).toBe('typed while reading');
+    expect(await text(`C${ROWS}`)).toBe(expectedC(ROWS - 1, 6));
+    if (!typedWhileReading) {
+      // typed into the opened file: undo that and the open, back to the workbook from before
+      await key('Control+z');
+      await key('Control+z');
+      await expect.poll(() => status().textContent()).toContain('Undid: Open');
+    }
   });
 
   it('says why a file cannot be read, and leaves the workbook as it was', async () => {

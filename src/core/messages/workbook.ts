@@ -71,6 +71,15 @@ export const workbookMessages = {
     const s = `Opened ${excerpt(file, 60)}: ${count(sheets)} sheet${sheets === 1 ? '' : 's'}, ${count(cells)} cells.`;
     return skipped === 0 ? s : `${s} ${count(skipped)} cell${skipped === 1 ? '' : 's'} held something the preview does not keep (pictures, rich text formatting, comments): their values were kept.`;
   },
+  reading(file: string, megabytes: number, seconds: number): string {
+    return `Reading ${excerpt(file, 60)} (${megabytes.toFixed(1)} MB)… ${seconds} s. The grid stays usable meanwhile; the file replaces this workbook only once you confirm`;
+  },
+  opening(file: string, cells: number): string {
+    return `Opening ${excerpt(file, 60)}: calculating ${count(cells)} cells…`;
+  },
+  saving(seconds: number): string {
+    return `Saving as .xlsx… ${seconds} s. The grid stays usable meanwhile; what you change now goes into the next save`;
+  },
   saved(file: string): string {
     return `Saved ${excerpt(file, 60)}. PHZ formulas calculate in Excel once the Starpoint add-in is loaded.`;
   },
