@@ -134,14 +134,12 @@ export interface EngineOptions {
  * spill areas whose size followed a change of inputs.
  */
 export class PhzEngine {
-  /** The engine itself; `rebuild` puts a new one in its place. */
-  hf: HyperFormula;
+  /** The engine itself (none yet for an engine made empty and not used: see `hf`). */
+  private current: HyperFormula | undefined;
   private readonly config: Record<string, unknown>;
 
   constructor(options: EngineOptions = {}) {
     registerRegistry(options.registry ?? defaultRegistry);
-    // Excel keeps 15 significant figures of a number; the engine's default hands out 11
-    // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures.
     // Excel keeps 15 significant figures of a number; the engine's default hands out 11
     // (precisionRounding 10), which would make PHZ.REAL(…, 15) look like 11 figures. Its
     // rounding also snaps sums that cancel to 0, as Excel does (smartRounding).
@@ -165,12 +163,19 @@ export class PhzEngine {
       graphPatched = true;
     }
     const sheets = Object.fromEntries(Object.entries(options.sheets ?? {}).map(([name, rows]) => [name, prepareRows(rows)]));
-    this.hf =
-      Object.keys(sheets).length > 0
-        ? HyperFormula.buildFromSheets(sheets, config, LOGICAL_NAMES)
-        : HyperFormula.buildEmpty(config, LOGICAL_NAMES);
-    indexDependencyGraph(this.hf);
-    this.settle();
+    if (Object.keys(sheets).length > 0) {
+      this.current = HyperFormula.buildFromSheets(sheets, config, LOGICAL_NAMES);
+      this.settle();
+    }
+  }
+
+  /**
+   * The engine itself; `rebuild` puts a new one in its place. An engine made empty builds
+   * its empty engine when first used, so a page that loads a kept workbook into it at once
+   * (main.ts) does not build one to throw away.
+   */
+  get hf(): HyperFormula {
+    return (this.current ??= HyperFormula.buildEmpty(this.config, LOGICAL_NAMES));
   }
 
   /**
@@ -201,16 +206,16 @@ export class PhzEngine {
     if (!next) {
       next = HyperFormula.buildEmpty(this.config, LOGICAL_NAMES);
       for (const name of order) next.addSheet(name);
-      const old = this.hf;
-      this.hf = next;
-      old.destroy();
+      const old = this.current;
+      this.current = next;
+      old?.destroy();
       for (const n of names) this.hf.addNamedExpression(n.name, n.expression, n.scope === undefined ? undefined : this.hf.getSheetId(n.scope));
       for (const s of sheets) if (s.rows.length > 0) this.writeCells({ sheet: this.hf.getSheetId(s.name) ?? 0, row: 0, col: 0 }, s.rows);
       return;
     }
-    const old = this.hf;
-    this.hf = next;
-    old.destroy();
+    const old = this.current;
+    this.current = next;
+    old?.destroy();
     this.settle();
   }
 
