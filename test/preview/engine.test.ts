@@ -231,3 +231,17 @@ describe('preview engine: STARLOAD neutral left out versus a blank cell', () => 
     expect((empty[0][0] as { message: string }).message).toMatch(/^neutral refers to a blank cell/);
   });
 });
+
+describe('typed text the engine reads as a date or time', () => {
+  it('still reads dates and times beside phasor text (which skips the date formats)', () => {
+    const engine = new PhzEngine({ sheets: { S: [['31/12/2024', '230∠-120', '31/12/2024', '12:30', '5+j2', '12:30']] } });
+    // serial day numbers of the 1900 date system (common practice): days since 1899-12-30
+    const day = (Date.UTC(2024, 11, 31) - Date.UTC(1899, 11, 30)) / 86_400_000;
+    expect(engine.display({ sheet: 0, row: 0, col: 0 })).toBe(day);
+    expect(engine.display({ sheet: 0, row: 0, col: 1 })).toBe('230∠-120');
+    expect(engine.display({ sheet: 0, row: 0, col: 2 })).toBe(day);
+    expectClose(engine.display({ sheet: 0, row: 0, col: 3 }) as number, 12.5 / 24, 1e-12);
+    expect(engine.display({ sheet: 0, row: 0, col: 4 })).toBe('5+j2');
+    expectClose(engine.display({ sheet: 0, row: 0, col: 5 }) as number, 12.5 / 24, 1e-12);
+  });
+});
