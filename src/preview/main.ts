@@ -190,7 +190,11 @@ function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo
       // the workbook the file replaces, which Ctrl+Z brings back)
       const stop = ticking(grid, (s) => M.reading(file.name, file.size / 1024 / 1024, s));
       try {
-        const read = await files.read(await file.arrayBuffer(), file.name);
+        const reading = files.read(await file.arrayBuffer(), file.name);
+        // the copy of this workbook that Ctrl+Z brings back, taken while the worker reads
+        // (taken again at the end if anything is changed meanwhile)
+        const current = files.inWorker ? workbook.snapshot() : undefined;
+        const read = await reading;
         stop();
         if (!window.confirm(M.confirmOpen(file.name))) {
           grid.say('Nothing was opened.');
@@ -198,10 +202,11 @@ function addWorkbookActions(grid: Grid, workbook: Workbook, keeper: Keeper, demo
         }
         grid.say(M.opening(file.name, read.cells));
         await nextPaint();
-        workbook.replaceWith(read.doc, `Open ${file.name}`);
+        workbook.replaceWith(read.doc, `Open ${file.name}`, current);
         grid.showSheet(read.doc.sheets[0].name);
-        void keeper.flush();
         grid.say(M.opened(file.name, read.doc.sheets.length, read.cells, read.skipped));
+        // written once the opened workbook is shown
+        setTimeout(() => void keeper.flush(), 0);
       } catch (e) {
         stop();
         grid.say(e instanceof FileError ? e.message : M.fileUnreadable(file.name, e instanceof Error ? e.message : String(e)));

@@ -145,6 +145,8 @@ export class Workbook {
   private readonly undoStack: Edit[] = [];
   private readonly redoStack: Edit[] = [];
   private undoCells = 0;
+  /** Counts changes (every notice to listeners, every style set), so a snapshot knows whether it is still current. */
+  private revision = 0;
   private readonly listeners = new Set<ChangeListener>();
   private readonly noticeListeners = new Set<(message: string) => void>();
   private readonly cellListeners = new Set<CellsListener>();
@@ -181,11 +183,22 @@ export class Workbook {
   }
 
   private notify(): void {
+    this.revision++;
     for (const l of this.listeners) l();
+  }
+
+  /**
+   * The whole workbook as a document, with the revision it was taken at, to hand to
+   * `replaceWith` later: taken while a file is read, it spares the page that work when the
+   * file replaces the workbook (and is taken again if anything changed meanwhile).
+   */
+  snapshot(): { readonly doc: WorkbookDocument; readonly revision: number } {
+    return { doc: this.toDocument(), revision: this.revision };
   }
 
   /** Marks a cell as a title, note or heading (how it looks, not what it holds). */
   setStyle(sheet: string, row: number, col: number, style: CellStyle): void {
+    this.revision++;
     let map = this.styles.get(sheet);
     if (!map) this.styles.set(sheet, (map = new Map()));
     map.set(`${row},${col}`, style);
@@ -466,9 +479,13 @@ export class Workbook {
     this.notify();
   }
 
-  /** Replaces everything by `doc` as one undoable step (opening a file, a new workbook). */
-  replaceWith(doc: WorkbookDocument, label: string): void {
-    const before = this.toDocument();
+  /**
+   * Replaces everything by `doc` as one undoable step (opening a file, a new workbook).
+   * `earlier`: a `snapshot` of this workbook, used for the undo step when nothing changed
+   * since it was taken.
+   */
+  replaceWith(doc: WorkbookDocument, label: string, earlier?: { readonly doc: WorkbookDocument; readonly revision: number }): void {
+    const before = earlier?.revision === this.revision ? earlier.doc : this.toDocument();
     this.load(doc);
     this.record({ kind: 'document', before, after: doc, label });
     this.notify();

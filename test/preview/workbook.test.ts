@@ -217,6 +217,27 @@ describe('workbook: blocks, limits and documents', () => {
     expect(wb.raw('S', 2, 1)).toBe('=PHZ.SPLIT(A1:A2)');
   });
 
+  it('uses a snapshot taken earlier for the undo step only while nothing changed since', () => {
+    const other = new Workbook(new PhzEngine({ sheets: { Other: [[1]] } })).toDocument();
+    const { wb } = book();
+    const taken = wb.snapshot();
+    wb.replaceWith(other, 'Open other.xlsx', taken);
+    wb.undo();
+    expect(wb.toDocument()).toEqual(taken.doc);
+    // an edit after the snapshot: the undo step is taken again, the edit in it
+    const stale = wb.snapshot();
+    wb.setCell('S', 5, 0, 'typed while the file was read');
+    wb.replaceWith(other, 'Open other.xlsx', stale);
+    wb.undo();
+    expect(wb.raw('S', 5, 0)).toBe('typed while the file was read');
+    // a role set after the snapshot counts as a change too
+    const beforeStyle = wb.snapshot();
+    wb.setStyle('S', 0, 0, 'input');
+    wb.replaceWith(other, 'Open other.xlsx', beforeStyle);
+    wb.undo();
+    expect(wb.styleOf('S', 0, 0)).toBe('input');
+  });
+
   it('sets a column width as an undoable step', () => {
     const { wb } = book();
     wb.setColumnWidth('S', 2, 18.5);
