@@ -1,4 +1,5 @@
-/** A1-style addresses for the preview grid: columns A…Z, AA…, rows from 1. */
+/** A1-style addresses for the preview grid: columns A…Z, AA…, rows from 1 (src/taskpane/a1.ts underneath). */
+import { a1 as rowColA1, columnLetters, parseA1 as parseRowColA1 } from '../taskpane/a1';
 
 export interface CellPos {
   readonly row: number;
@@ -6,30 +7,15 @@ export interface CellPos {
 }
 
 /** 0 → `A`, 25 → `Z`, 26 → `AA`. */
-export function columnName(col: number): string {
-  let n = col + 1;
-  let s = '';
-  while (n > 0) {
-    const r = (n - 1) % 26;
-    s = String.fromCharCode(65 + r) + s;
-    n = Math.floor((n - 1) / 26);
-  }
-  return s;
-}
+export const columnName = columnLetters;
 
 /** `{row: 1, col: 1}` → `B2`. */
 export function a1(pos: CellPos): string {
-  return `${columnName(pos.col)}${pos.row + 1}`;
+  return rowColA1(pos.row, pos.col);
 }
 
 /** `B2` → `{row: 1, col: 1}`; `$B$2` accepted; `undefined` for anything else. */
-export function parseA1(text: string): CellPos | undefined {
-  const m = /^\s*\$?([A-Za-z]{1,3})\$?([1-9][0-9]{0,6})\s*$/.exec(text);
-  if (!m) return undefined;
-  let col = 0;
-  for (const ch of m[1].toUpperCase()) col = col * 26 + (ch.charCodeAt(0) - 64);
-  return { row: Number(m[2]) - 1, col: col - 1 };
-}
+export const parseA1: (text: string) => CellPos | undefined = parseRowColA1;
 
 /** A rectangle of cells, inclusive, with `top <= bottom` and `left <= right`. */
 export interface Rect {

@@ -12,7 +12,7 @@
 import { PhzError } from '../../core/errors';
 import { plotMessages as M } from '../../core/messages';
 import type { PhasorChartRequest } from '../port';
-import { a1, columnLetters, parseA1, sheetRef } from './address';
+import { a1, columnLetters, parseA1, sheetRef } from '../a1';
 import { phasorStyle, type MarkerShape } from './palette';
 import { unitFromLabel, unitToken } from './units';
 

@@ -19,7 +19,7 @@ import { isPhzError } from '../../core/errors';
 import { plotMessages, readerMessages } from '../../core/messages';
 import { parsePhasorWithQuantity } from '../../core/parse';
 import { isBlank, isPairBlock, readPhasors } from '../../functions/readers';
-import { a1 } from './address';
+import { a1 } from '../a1';
 import type { PlotData, PlotGroup, PlotPhasor, ScaleMode, SelectionBlock, SelectionCell, UnreadableCell } from './model';
 import { isNoUnitMark, unitFromLabel, unitOfQuantity, unitToken } from './units';
 

@@ -11,7 +11,7 @@
  */
 import { PhzError } from '../../core/errors';
 import { plotMessages as M } from '../../core/messages';
-import { columnLetters, parseA1 } from '../plot/address';
+import { columnLetters, parseA1 } from '../a1';
 import { checkChartRequest, freshChartName, freshSheetName, helperHeight, HELPER_COLUMNS, planChart } from '../plot/chart-plan';
 import type { SelectionBlock, SelectionCell } from '../plot/model';
 import type { PhasorChartRequest, PhasorChartResult, PlotPort, PlotRange, PlotSupport, SelectionChange } from '../port';

@@ -18,6 +18,7 @@
  * The chart place sits to the right (K onwards), beside the inputs.
  */
 import type { PhasorChartRequest } from '../port';
+import { a1, columnLetters } from '../a1';
 
 /** What a cell is for; adapters style by role. */
 export type CellRole =
@@ -141,21 +142,10 @@ export const COL = {
 export const FULL = 15;
 
 /** 0 → `A`, 25 → `Z`, 26 → `AA`. */
-export function columnLetter(col: number): string {
-  let n = col + 1;
-  let s = '';
-  while (n > 0) {
-    const r = (n - 1) % 26;
-    s = String.fromCharCode(65 + r) + s;
-    n = Math.floor((n - 1) / 26);
-  }
-  return s;
-}
+export const columnLetter = columnLetters;
 
-/** `{row: 1, col: 1}` → `B2`. */
-export function cellA1(row: number, col: number): string {
-  return `${columnLetter(col)}${row + 1}`;
-}
+/** `(1, 1)` → `B2`. */
+export const cellA1 = a1;
 
 // ------------------------------------------------------------------ sheet names
 

@@ -1,7 +1,7 @@
 /** Units for the legend from labels and unit words (symbols of SI, IEC 80000-6 / common practice). */
 import { describe, expect, it } from 'vitest';
 import { unitFromLabel, unitToken } from '../../../src/taskpane/plot/units';
-import { a1, columnLetters, parseA1, sheetRef } from '../../../src/taskpane/plot/address';
+import { a1, columnLetters, parseA1, sheetRef } from '../../../src/taskpane/a1';
 
 describe('units', () => {
   it.each([

@@ -10,7 +10,7 @@ import { calculationById, calculations } from '../../../src/taskpane/sheets/calc
 import { demoValues, readField, readFields } from '../../../src/taskpane/sheets/calculation';
 import { COL, F, cellA1, looksLikeAddress, nameOf, planGrid, uniqueSheetName, type SheetPlan } from '../../../src/taskpane/sheets/plan';
 import { magnitudesOnly } from '../../../src/taskpane/sheets/unbalance';
-import { parseA1 } from '../../../src/taskpane/plot/address';
+import { parseA1 } from '../../../src/taskpane/a1';
 
 const META = { scenario: 'Planner test scenario', date: '2026-12-02' };
 const plans: Array<[string, SheetPlan]> = calculations.map((c) => [c.id, c.plan(demoValues(c), META)]);

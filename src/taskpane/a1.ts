@@ -1,4 +1,7 @@
-/** A1 addresses for the plot (the pane cannot import the preview's helpers). */
+/**
+ * A1 addresses, one implementation for the pane (plot, worked sheets, Excel adapters) and the
+ * preview (which may import the pane's modules; the pane may not import the preview's).
+ */
 
 /** Column letters of a zero-based column index: 0 → A, 25 → Z, 26 → AA. */
 export function columnLetters(col: number): string {
