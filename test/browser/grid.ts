@@ -4,6 +4,7 @@
  * itself, built here in node the same way the page builds it.
  */
 import type { Locator, Page } from 'playwright-core';
+import { expect } from 'vitest';
 import { specs } from '../../src/functions';
 import { parseA1 } from '../../src/preview/address';
 import { DEMO_SHEET, loadDemo } from '../../src/preview/demo';
@@ -78,4 +79,19 @@ export function demoRow(label: string): number {
   const row = demoColumnA.get(label);
   if (row === undefined) throw new Error(`the demo has no line labelled ${label}`);
   return row;
+}
+
+/** Moves the selection to `address` through the name box, as a person does, and waits for it. */
+export async function goTo(page: Page, address: string): Promise<void> {
+  const nameBox = page.locator('#pv-namebox');
+  await nameBox.fill(address);
+  await nameBox.press('Enter');
+  await expect.poll(() => nameBox.inputValue()).toBe(address);
+}
+
+/** Types into a cell the way a person does: select, type, Enter. */
+export async function typeIn(page: Page, address: string, text: string): Promise<void> {
+  await goTo(page, address);
+  await page.keyboard.type(text);
+  await page.keyboard.press('Enter');
 }

@@ -11,7 +11,7 @@ import { XMLParser, XMLValidator } from 'fast-xml-parser';
 import { chromium } from 'playwright-core';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { cellText, demoRow } from './grid';
+import { cellText, demoRow, goTo } from './grid';
 import { CHROMIUM_ARGS, chromiumPath, repoRoot, startServer } from './server';
 import type { RunningServer } from './server';
 
@@ -21,15 +21,10 @@ let page: Page;
 const problems: string[] = [];
 const artifacts = path.join(repoRoot, 'test-artifacts');
 
-const nameBox = () => page.locator('#pv-namebox');
 const plot = () => page.locator('[data-part="plot"]');
 const arrows = (role = 'phasor') => plot().locator(`.sp-plot-figure g.phasor[data-role="${role}"]`);
 
-async function select(address: string): Promise<void> {
-  await nameBox().fill(address);
-  await nameBox().press('Enter');
-  await expect.poll(() => nameBox().inputValue()).toBe(address);
-}
+const select = (address: string) => goTo(page, address);
 
 async function text(address: string): Promise<string> {
   return cellText(page, address);

@@ -13,7 +13,7 @@ import { specByName, specs } from '../../src/functions';
 import { SUB_BOARD } from '../../src/preview/demo';
 import { evaluateFormula, isDisplayError } from '../../src/preview/engine';
 import { formatNumber } from '../../src/preview/format';
-import { cellText, demoRow, intendedError, reveal } from './grid';
+import { cellText, demoRow, goTo, intendedError, reveal, typeIn } from './grid';
 import { CHROMIUM_ARGS, chromiumPath, repoRoot, startServer } from './server';
 import type { RunningServer } from './server';
 
@@ -27,18 +27,9 @@ const cell = (address: string) => page.locator(`.pv-cell[data-cell="${address}"]
 const formulaBar = () => page.getByLabel('Formula', { exact: true });
 const nameBox = () => page.locator('#pv-namebox');
 
-async function selectCell(address: string): Promise<void> {
-  await nameBox().fill(address);
-  await nameBox().press('Enter');
-  await expect.poll(() => nameBox().inputValue()).toBe(address);
-}
+const selectCell = (address: string) => goTo(page, address);
 
-/** Types into a cell the way a person does: select, type, Enter. */
-async function typeInto(address: string, text: string): Promise<void> {
-  await selectCell(address);
-  await page.keyboard.type(text);
-  await page.keyboard.press('Enter');
-}
+const typeInto = (address: string, text: string) => typeIn(page, address, text);
 
 async function text(address: string): Promise<string> {
   return cellText(page, address);

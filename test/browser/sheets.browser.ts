@@ -13,7 +13,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { calculations } from '../../src/taskpane/sheets/calculations';
 import { demoValues, readField } from '../../src/taskpane/sheets/calculation';
 import { COL, cellA1 } from '../../src/taskpane/sheets/plan';
-import { cellText, reveal } from './grid';
+import { cellText, goTo, reveal, typeIn } from './grid';
 import { CHROMIUM_ARGS, chromiumPath, repoRoot, startServer } from './server';
 import type { RunningServer } from './server';
 
@@ -27,17 +27,9 @@ const nameBox = () => page.locator('#pv-namebox');
 const statusLine = () => page.locator('.sps-status');
 const activeTab = () => page.locator('.pv-tabs button[role="tab"][aria-selected="true"]');
 
-async function selectCell(address: string): Promise<void> {
-  await nameBox().fill(address);
-  await nameBox().press('Enter');
-  await expect.poll(() => nameBox().inputValue()).toBe(address);
-}
+const selectCell = (address: string) => goTo(page, address);
 
-async function typeInto(address: string, text: string): Promise<void> {
-  await selectCell(address);
-  await page.keyboard.type(text);
-  await page.keyboard.press('Enter');
-}
+const typeInto = (address: string, text: string) => typeIn(page, address, text);
 
 async function text(address: string): Promise<string> {
   return cellText(page, address);

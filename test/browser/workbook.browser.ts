@@ -16,7 +16,7 @@ import type { Browser, BrowserContext, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { evaluateFormula } from '../../src/preview/engine';
 import { formatNumber } from '../../src/preview/format';
-import { cellText, demoSheetNames, reveal } from './grid';
+import { cellText, demoSheetNames, goTo, reveal, typeIn } from './grid';
 import { CHROMIUM_ARGS, chromiumPath, repoRoot, startServer } from './server';
 import type { RunningServer } from './server';
 
@@ -35,17 +35,9 @@ const nameBox = () => page.locator('#pv-namebox');
 const formulaBar = () => page.getByLabel('Formula', { exact: true });
 const status = () => page.locator('.pv-status');
 
-async function go(address: string): Promise<void> {
-  await nameBox().fill(address);
-  await nameBox().press('Enter');
-  await expect.poll(() => nameBox().inputValue()).toBe(address);
-}
+const go = (address: string) => goTo(page, address);
 
-async function typeInto(address: string, text: string): Promise<void> {
-  await go(address);
-  await page.keyboard.type(text);
-  await page.keyboard.press('Enter');
-}
+const typeInto = (address: string, text: string) => typeIn(page, address, text);
 
 const text = (address: string) => cellText(page, address);
 

@@ -11,9 +11,9 @@
  * against step 3. With no line impedances the branch voltages are the line voltages.
  */
 import { functions } from '../../functions';
-import { F, PlanBuilder, type SheetPlan } from './plan';
+import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, column3, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { K, agreement, lineFields, phasorInputs } from './star-common';
+import { agreement, K, lineFields, openPlan, powerBalanceCheck } from './star-common';
 import { LINE_CLOSE_REL } from '../../core/threephase/sets';
 
 /** |V12 + V23 + V31| over the mean line-voltage magnitude. */
@@ -53,18 +53,12 @@ const FIELDS: readonly FieldSpec[] = [
 ];
 
 function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
-  const b = new PlanBuilder({
+  const b = openPlan(meta, FIELDS, values, {
     calculation: 'delta',
     title: 'Delta load',
     subtitle: 'Unbalanced delta load fed by its line-to-line voltages through line impedances: branch and line currents (star equivalent, Millman).',
-    scenario: meta.scenario,
-    date: meta.date,
     sheetName: 'Delta load',
   });
-  b.section('Inputs', 'inputs');
-  phasorInputs(b, FIELDS, values);
-
-  b.section('Steps', 'steps');
   K.forEach((k, i) => {
     const [a, c] = [BR[i], BR[(i + 2) % 3]];
     b.step({
@@ -162,13 +156,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
       'KCL; residual over the largest line current',
     );
   });
-  b.check(
-    'Power balance',
-    'S source = S load + S lines',
-    `PHZ.MAG(${F.sub('S_source', F.add('S_load', 'S_lines'))})/PHZ.MAG(S_source)`,
-    1e-9,
-    'conservation of complex power (Tellegen); residual over |S source|',
-  );
+  powerBalanceCheck(b);
   b.check(
     'Currents agree with PHZ.DELTALOAD',
     'I1, I2, I3, I12, I23, I31 of the steps = the solver’s',

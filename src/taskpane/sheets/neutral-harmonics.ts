@@ -14,9 +14,9 @@
  *   70 %, the nonlinear part at 100 %.
  */
 import { functions } from '../../functions';
-import { F, PlanBuilder, type SheetPlan } from './plan';
+import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, column3, phaseFields, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { K, phasorInputs } from './star-common';
+import { K, openPlan } from './star-common';
 
 /** The harmonic orders the sheet takes, with our demo contents (percent of the fundamental). */
 export const ORDERS = [3, 5, 7, 9, 11, 13, 15] as const;
@@ -59,18 +59,12 @@ const FIELDS: readonly FieldSpec[] = [
 ];
 
 function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
-  const b = new PlanBuilder({
+  const b = openPlan(meta, FIELDS, values, {
     calculation: 'neutral-harmonics',
     title: 'Neutral with harmonics and sizing',
     subtitle: 'rms neutral current of three phase currents with harmonics, IEC 60364-5-52 Annex E sizing current, NFPA 70 220.61 feeder neutral load.',
-    scenario: meta.scenario,
-    date: meta.date,
     sheetName: 'Neutral and harmonics',
   });
-  b.section('Inputs', 'inputs');
-  phasorInputs(b, FIELDS, values);
-
-  b.section('Steps', 'steps');
   b.step({ quantity: 'Neutral current at the fundamental', symbol: 'IN1', name: 'I_N1', relation: 'IN1 = I1 + I2 + I3', formula: F.add('I_1', 'I_2', 'I_3'), unit: 'A' });
   for (const h of ORDERS) {
     b.step({

@@ -19,9 +19,9 @@
 import { connectionName } from '../../core/threephase';
 import { functions } from '../../functions';
 import { readConnection, readFraction, readLoad, readPowerFactor } from '../../functions/feeders/_schedule';
-import { F, PlanBuilder, type SheetPlan } from './plan';
+import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, column3, phaseFields, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { K, agreement, phasorInputs } from './star-common';
+import { K, agreement, openPlan } from './star-common';
 
 /** Circuits on the sheet (a spare is a blank load). */
 export const CIRCUITS = 12;
@@ -140,19 +140,13 @@ function onGroup(word: string, term: (c: number) => string): string[] {
 }
 
 function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
-  const b = new PlanBuilder({
+  const b = openPlan(meta, FIELDS, values, {
     calculation: 'panel-schedule',
     title: 'Panel schedule',
     subtitle:
       'A board’s circuits aggregated into line currents, the neutral current (fundamental and rms with harmonics), the NFPA 70 220.61 maximum unbalanced load, the current unbalance, and the feeder’s voltage drop with the actual neutral current. Loads at the supply voltage; apply demand factors to the loads first.',
-    scenario: meta.scenario,
-    date: meta.date,
     sheetName: 'Panel schedule',
   });
-  b.section('Inputs', 'inputs');
-  phasorInputs(b, FIELDS, values);
-
-  b.section('Steps', 'steps');
   C.forEach((c) =>
     b.step({
       quantity: `Circuit ${c} complex power`,

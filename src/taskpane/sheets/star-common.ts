@@ -4,7 +4,8 @@
  * planner itself; the planners beside it (star-neutral, star-open) use it.
  */
 import { F, PlanBuilder } from './plan';
-import type { FieldSpec, FieldValues } from './calculation';
+import type { PlanHeader } from './plan';
+import type { FieldSpec, FieldValues, PlanMeta } from './calculation';
 import { phaseFields } from './calculation';
 
 export const K = [1, 2, 3] as const;
@@ -19,6 +20,18 @@ export function loadFields(demo: readonly [string, string, string]): FieldSpec[]
 
 export function lineFields(demo: readonly [string, string, string]): FieldSpec[] {
   return phaseFields('ZL', (k) => `line ${k} impedance (0 for none)`, 'Ω', 'impedance', demo, 'Lines', 'impedance; 0 when none');
+}
+
+/**
+ * A sheet's opening, the same for every calculation: its head (title, what it is, the scenario
+ * and date of `meta`), the Inputs block with `fields` in order, and the Steps heading.
+ */
+export function openPlan(meta: PlanMeta, fields: readonly FieldSpec[], values: FieldValues, head: Omit<PlanHeader, 'scenario' | 'date'>): PlanBuilder {
+  const b = new PlanBuilder({ ...head, scenario: meta.scenario, date: meta.date });
+  b.section('Inputs', 'inputs');
+  phasorInputs(b, fields, values);
+  b.section('Steps', 'steps');
+  return b;
 }
 
 /** The phasor inputs E1–E3, Z1–Z3 (and what `more` adds), in the sheet's inputs block. */
@@ -108,3 +121,28 @@ export function agreement(pairs: ReadonlyArray<readonly [string, string]>): stri
 
 /** The largest source voltage magnitude, a scale for voltage residuals. */
 export const E_SCALE = 'MAX(PHZ.MAG(E_1), PHZ.MAG(E_2), PHZ.MAG(E_3))';
+
+/**
+ * The power-balance check of a network fed through line impedances: what the source delivers
+ * is what the load, the lines (and `more`, e.g. the neutral impedance) take (Tellegen).
+ */
+export function powerBalanceCheck(b: PlanBuilder, more: { name: string; label: string }[] = []): void {
+  b.check(
+    'Power balance',
+    ['S source = S load + S lines', ...more.map((m) => m.label)].join(' + '),
+    `PHZ.MAG(${F.sub('S_source', F.add('S_load', 'S_lines', ...more.map((m) => m.name)))})/PHZ.MAG(S_source)`,
+    1e-9,
+    'conservation of complex power (Tellegen); residual over |S source|',
+  );
+}
+
+/** The star solvers' voltages check: U1–U3 and VN of the steps against PHZ.STARLOAD's (`at(row, column)` of its block). */
+export function starVoltagesAgree(b: PlanBuilder, at: (row: number, col: number) => string): void {
+  b.check(
+    'Voltages agree with PHZ.STARLOAD',
+    'U1, U2, U3, VN of the steps = the solver’s',
+    `MAX(${[...K.map((k) => `PHZ.MAG(${F.sub(`U_${k}`, at(k - 1, 1))})`), `PHZ.MAG(${F.sub('V_N', at(3, 1))})`].join(', ')})/${E_SCALE}`,
+    1e-9,
+    'largest difference over the largest source voltage',
+  );
+}

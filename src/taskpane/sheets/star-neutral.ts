@@ -5,9 +5,9 @@
  * exactly 0 for ZN = 0.
  */
 import { functions } from '../../functions';
-import { F, PlanBuilder, type SheetPlan } from './plan';
+import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, column3, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { E_SCALE, K, agreement, branchSteps, currentAndPowerSteps, lineFields, loadFields, phasorInputs, sourceFields, sourcePowerStep } from './star-common';
+import { agreement, branchSteps, currentAndPowerSteps, E_SCALE, K, lineFields, loadFields, openPlan, powerBalanceCheck, sourceFields, sourcePowerStep, starVoltagesAgree } from './star-common';
 
 const FIELDS: readonly FieldSpec[] = [
   ...sourceFields(['231∠0', '228∠-119.5', '232∠120.4']),
@@ -26,18 +26,12 @@ const FIELDS: readonly FieldSpec[] = [
 ];
 
 function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
-  const b = new PlanBuilder({
+  const b = openPlan(meta, FIELDS, values, {
     calculation: 'star-neutral',
     title: 'Star load with neutral',
     subtitle: 'Unbalanced star load fed from a star source through line impedances, neutral solid or impedant (Millman’s theorem).',
-    scenario: meta.scenario,
-    date: meta.date,
     sheetName: 'Star with neutral',
   });
-  b.section('Inputs', 'inputs');
-  phasorInputs(b, FIELDS, values);
-
-  b.section('Steps', 'steps');
   branchSteps(b);
   b.step({
     quantity: 'Star-point shift (load star point to source neutral)',
@@ -68,13 +62,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
     1e-9,
     'KCL; residual over the largest source voltage',
   );
-  b.check(
-    'Power balance',
-    'S source = S load + S lines + S neutral',
-    `PHZ.MAG(${F.sub('S_source', F.add('S_load', 'S_lines', 'S_neutral'))})/PHZ.MAG(S_source)`,
-    1e-9,
-    'conservation of complex power (Tellegen); residual over |S source|',
-  );
+  powerBalanceCheck(b, [{ name: 'S_neutral', label: 'S neutral' }]);
   b.check(
     'Currents agree with PHZ.STARLOAD',
     'I1, I2, I3, IN of the steps = the solver’s',
@@ -82,13 +70,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
     1e-9,
     'largest difference over the largest current',
   );
-  b.check(
-    'Voltages agree with PHZ.STARLOAD',
-    'U1, U2, U3, VN of the steps = the solver’s',
-    `MAX(${[...K.map((k) => `PHZ.MAG(${F.sub(`U_${k}`, at(k - 1, 1))})`), `PHZ.MAG(${F.sub('V_N', at(3, 1))})`].join(', ')})/${E_SCALE}`,
-    1e-9,
-    'largest difference over the largest source voltage',
-  );
+  starVoltagesAgree(b, at);
 
   b.cautions([
     ...COMMON_CAUTIONS,

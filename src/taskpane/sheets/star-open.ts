@@ -7,9 +7,9 @@
  * voltage outside it is outside what equipment is built for.
  */
 import { functions } from '../../functions';
-import { F, PlanBuilder, type SheetPlan } from './plan';
+import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, column3, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { E_SCALE, K, agreement, branchSteps, currentAndPowerSteps, lineFields, loadFields, phasorInputs, sourceFields, sourcePowerStep } from './star-common';
+import { agreement, branchSteps, currentAndPowerSteps, K, lineFields, loadFields, openPlan, powerBalanceCheck, sourceFields, sourcePowerStep, starVoltagesAgree } from './star-common';
 
 /** The over-voltage flag threshold: 10 % above nominal (IEC 60038 supply tolerance, from memory). */
 export const OVERVOLTAGE_LIMIT = 1.1;
@@ -32,18 +32,12 @@ const FIELDS: readonly FieldSpec[] = [
 ];
 
 function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
-  const b = new PlanBuilder({
+  const b = openPlan(meta, FIELDS, values, {
     calculation: 'star-open',
     title: 'Star load without neutral',
     subtitle: 'Three-wire star load: the load star point floats (Millman’s theorem); load voltages against the nominal phase voltage.',
-    scenario: meta.scenario,
-    date: meta.date,
     sheetName: 'Star without neutral',
   });
-  b.section('Inputs', 'inputs');
-  phasorInputs(b, FIELDS, values);
-
-  b.section('Steps', 'steps');
   branchSteps(b);
   b.step({
     quantity: 'Star-point shift (load star point to source neutral)',
@@ -92,21 +86,9 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
     1e-9,
     'KCL; residual over the largest line current',
   );
-  b.check(
-    'Power balance',
-    'S source = S load + S lines',
-    `PHZ.MAG(${F.sub('S_source', F.add('S_load', 'S_lines'))})/PHZ.MAG(S_source)`,
-    1e-9,
-    'conservation of complex power (Tellegen); residual over |S source|',
-  );
+  powerBalanceCheck(b);
   b.check('Currents agree with PHZ.STARLOAD', 'I1, I2, I3 of the steps = the solver’s', agreement(K.map((k) => [`I_${k}`, at(k - 1, 0)] as const)), 1e-9, 'largest difference over the largest current');
-  b.check(
-    'Voltages agree with PHZ.STARLOAD',
-    'U1, U2, U3, VN of the steps = the solver’s',
-    `MAX(${[...K.map((k) => `PHZ.MAG(${F.sub(`U_${k}`, at(k - 1, 1))})`), `PHZ.MAG(${F.sub('V_N', at(3, 1))})`].join(', ')})/${E_SCALE}`,
-    1e-9,
-    'largest difference over the largest source voltage',
-  );
+  starVoltagesAgree(b, at);
 
   b.cautions([
     ...COMMON_CAUTIONS,

@@ -4,9 +4,9 @@
  * power, line currents, neutral current, the equivalent impedances, totals.
  */
 import { functions } from '../../functions';
-import { F, PlanBuilder, type SheetPlan } from './plan';
+import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { K, agreement, phasorInputs, sourceFields } from './star-common';
+import { K, agreement, openPlan, sourceFields } from './star-common';
 
 const PF_DEMO = ['0.88', '0.95', '0.82'] as const;
 const P_DEMO = ['4600', '2900', '3700'] as const;
@@ -50,18 +50,12 @@ const FIELDS: readonly FieldSpec[] = [
 ];
 
 function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
-  const b = new PlanBuilder({
+  const b = openPlan(meta, FIELDS, values, {
     calculation: 'star-power',
     title: 'Star load from power and power factor',
     subtitle: 'Four-wire star load given per phase as real power and power factor (a panel schedule), taken at the source phase voltages.',
-    scenario: meta.scenario,
-    date: meta.date,
     sheetName: 'Star from P and pf',
   });
-  b.section('Inputs', 'inputs');
-  phasorInputs(b, FIELDS, values);
-
-  b.section('Steps', 'steps');
   K.forEach((k) =>
     b.step({
       quantity: `Phase ${k} complex power`,

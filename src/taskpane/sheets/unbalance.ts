@@ -17,9 +17,9 @@
  */
 import { functions } from '../../functions';
 import { readNumber } from '../../functions/readers';
-import { F, PlanBuilder, type SheetPlan } from './plan';
+import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { K, phasorInputs } from './star-common';
+import { K, openPlan } from './star-common';
 import { CLOSURE_RESIDUAL } from './delta';
 import { LINE_CLOSE_REL } from '../../core/threephase/sets';
 
@@ -56,23 +56,14 @@ export function magnitudesOnly(values: FieldValues): boolean {
 
 function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
   const mags = magnitudesOnly(values);
-  const b = new PlanBuilder({
+  const inputs = mags ? Object.fromEntries(BR.map((br) => [`V${br}`, readNumber(values[`V${br}`], `V${br}`)])) : values;
+  const fields = FIELDS.map((f) => (mags ? { ...f, kind: 'number' as const } : f));
+  const b = openPlan(meta, fields, inputs, {
     calculation: 'unbalance',
     title: 'Supply unbalance check',
     subtitle: `Voltage unbalance of a three-phase supply from its measured line voltages (${mags ? 'magnitudes only: angles by the law of cosines' : 'phasors'}), against the usual limits.`,
-    scenario: meta.scenario,
-    date: meta.date,
     sheetName: 'Supply unbalance',
   });
-  b.section('Inputs', 'inputs');
-  const inputs = mags ? Object.fromEntries(BR.map((br) => [`V${br}`, readNumber(values[`V${br}`], `V${br}`)])) : values;
-  phasorInputs(
-    b,
-    FIELDS.map((f) => (mags ? { ...f, kind: 'number' as const } : f)),
-    inputs,
-  );
-
-  b.section('Steps', 'steps');
   if (mags) {
     BR.forEach((br) => b.step({ quantity: `Magnitude of V${br}`, symbol: `U${br}`, relation: `U${br} = |V${br}|`, formula: `PHZ.MAG(V_${br})`, unit: 'V', kind: 'number' }));
     b.step({
