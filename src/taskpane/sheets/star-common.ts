@@ -1,7 +1,8 @@
 /**
- * Pieces the star-load sheets share: the input block (source voltages, load, neutral and
- * line impedances) and the phase-by-phase steps up to the branch admittances. Not a
- * planner itself; the planners beside it (star-neutral, star-open) use it.
+ * Pieces the planners share: every sheet's opening (`openPlan`: head, inputs block, Steps
+ * heading), the star inputs (source voltages, load, neutral and line impedances), the
+ * phase-by-phase steps up to the branch admittances, and the checks of networks fed through
+ * line impedances. Not a planner itself.
  */
 import { F, PlanBuilder } from './plan';
 import type { PlanHeader } from './plan';
