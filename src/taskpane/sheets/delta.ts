@@ -13,7 +13,7 @@
 import { functions } from '../../functions';
 import { F, type SheetPlan } from './plan';
 import { COMMON_CAUTIONS, column3, type Calculation, type FieldSpec, type FieldValues, type PlanMeta } from './calculation';
-import { agreement, K, lineFields, openPlan, powerBalanceCheck } from './star-common';
+import { agreement, K, lineFields, lineLossStep, openPlan, powerBalanceCheck } from './star-common';
 import { LINE_CLOSE_REL } from '../../core/threephase/sets';
 
 /** |V12 + V23 + V31| over the mean line-voltage magnitude. */
@@ -113,14 +113,7 @@ function plan(values: FieldValues, meta: PlanMeta): SheetPlan {
     b.step({ quantity: `Branch ${br[0]}–${br[1]} complex power`, symbol: `S${br}`, relation: `S${br} = V′${br} · I${br}*`, formula: F.power(`Vb_${br}`, `I_${br}`), unit: 'VA' }),
   );
   b.step({ quantity: 'Total load complex power', symbol: 'S load', name: 'S_load', relation: 'S load = S12 + S23 + S31', formula: F.add('S_12', 'S_23', 'S_31'), unit: 'VA' });
-  b.step({
-    quantity: 'Losses in the line impedances',
-    symbol: 'S lines',
-    name: 'S_lines',
-    relation: 'S lines = Σ |Ik|² · ZLk',
-    formula: F.add(...K.map((k) => F.loss(`I_${k}`, `Z_L${k}`))),
-    unit: 'VA',
-  });
+  lineLossStep(b);
   b.step({
     quantity: 'Complex power delivered by the supply',
     symbol: 'S source',

@@ -91,7 +91,12 @@ export function currentAndPowerSteps(b: PlanBuilder, afterCurrents?: () => void)
     b.step({ quantity: `Phase ${k} load complex power`, symbol: `S${k}`, relation: `S${k} = U${k} · I${k}*`, formula: F.power(`U_${k}`, `I_${k}`), unit: 'VA' }),
   );
   b.step({ quantity: 'Total load complex power', symbol: 'S load', name: 'S_load', relation: 'S load = S1 + S2 + S3', formula: F.add('S_1', 'S_2', 'S_3'), unit: 'VA' });
-  b.step({
+  lineLossStep(b);
+}
+
+/** Losses in the line impedances, S lines = Σ |Ik|²·ZLk (line currents I_1–I_3). */
+export function lineLossStep(b: PlanBuilder): string {
+  return b.step({
     quantity: 'Losses in the line impedances',
     symbol: 'S lines',
     name: 'S_lines',
